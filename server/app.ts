@@ -1,0 +1,72 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import pg from 'pg';
+import { pinoHttp } from 'pino-http';
+import { config } from './config';
+import { logger } from './lib/logger';
+import { repoRoot } from './lib/paths';
+import { csrfProtection } from './middleware/csrf';
+import { errorHandler } from './middleware/error-handler';
+import { apiNotFound } from './middleware/not-found';
+import { requestId } from './middleware/request-id';
+import { passport, sessionMiddleware } from './middleware/session';
+import { authRouter } from './routes/auth.routes';
+import { groupsRouter } from './routes/groups.routes';
+import { healthRouter } from './routes/health.routes';
+
+export interface AppOptions {
+  /** Pool for the session store; the app makes its own from DATABASE_URL when none is given. */
+  sessionPool?: pg.Pool;
+  /** Serve the built client from dist/client (off in API tests). */
+  serveClient?: boolean;
+}
+
+/** Builds the Express app without listening, so tests drive it through supertest. */
+export function createApp(options: AppOptions = {}): Express {
+  const app = express();
+  app.set('trust proxy', 'loopback');
+  app.disable('x-powered-by');
+
+  app.use(requestId);
+  app.use(pinoHttp({ logger, genReqId: (req) => (req as express.Request).id, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // PrimeVue's theme writes its CSS variables into <style> tags at run time.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': config.COOKIE_SECURE ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use('/api', express.json({ limit: '256kb' }));
+
+  app.use('/api/health', healthRouter);
+
+  app.use('/api', sessionMiddleware(options.sessionPool ?? new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 })));
+  app.use('/api', passport.session());
+  app.use('/api', csrfProtection);
+  app.use('/api/auth', authRouter);
+  app.use('/api/groups', groupsRouter);
+  app.use('/api', apiNotFound);
+
+  if (options.serveClient ?? true) serveClient(app);
+  app.use(errorHandler);
+  return app;
+}
+
+// Deep links such as /plants/123 get index.html so the client router can take over.
+function serveClient(app: Express): void {
+  const dir = path.resolve(repoRoot, config.CLIENT_DIR);
+  const indexHtml = path.join(dir, 'index.html');
+  app.use(express.static(dir, { index: false, maxAge: '1h', setHeaders: (res, file) => file.includes(`${path.sep}assets${path.sep}`) && res.setHeader('Cache-Control', 'public, max-age=31536000, immutable') }));
+  app.get('/{*path}', (_req, res, next) => {
+    if (!fs.existsSync(indexHtml)) return next();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexHtml);
+  });
+}

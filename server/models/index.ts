@@ -1,0 +1,22 @@
+import type { Sequelize } from 'sequelize';
+import { Group } from './group.model';
+import { Membership } from './membership.model';
+import { OutboxMessage } from './outbox-message.model';
+import { PasswordResetToken } from './password-reset-token.model';
+import { Plant } from './plant.model';
+import { Site } from './site.model';
+import { User } from './user.model';
+
+export { Group, Membership, OutboxMessage, PasswordResetToken, Plant, Site, User };
+
+// Define every model first, then associate, so no association refers to a model not yet initialised.
+export function initModels(sequelize: Sequelize): void {
+  for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage]) model.initModel(sequelize);
+
+  Group.hasMany(Membership, { foreignKey: 'groupId', as: 'memberships' });
+  Membership.belongsTo(Group, { foreignKey: 'groupId', as: 'group' });
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Site.hasMany(Plant, { foreignKey: 'siteId', as: 'plants' });
+  Plant.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+}
