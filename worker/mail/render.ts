@@ -1,0 +1,15 @@
+import { mailPayloadSchemas, type MailKind } from '../../server/schemas/mail';
+import type { RenderedMail } from './layout';
+import { renderPasswordReset } from './password-reset';
+
+const renderers: { [K in MailKind]: (payload: never) => RenderedMail } = {
+  'password-reset': renderPasswordReset,
+};
+
+/** Renders a queued message; a payload that no longer matches its schema is an error to record, not to send. */
+export function renderMail(kind: string, payload: unknown): RenderedMail {
+  if (!(kind in mailPayloadSchemas)) throw new Error(`Unknown mail kind "${kind}"`);
+  const typedKind = kind as MailKind;
+  const parsed = mailPayloadSchemas[typedKind].parse(payload);
+  return renderers[typedKind](parsed as never);
+}
