@@ -64,3 +64,16 @@ export type Hemisphere = 'north' | 'south';
 export function hemisphereOf(latitude: number): Hemisphere {
   return latitude < 0 ? 'south' : 'north';
 }
+
+/** True for a `YYYY-MM-DD` string naming a day that exists (no 30 February). */
+export function isIsoDate(value: string): boolean {
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(value)) return false;
+  const [y, m, d] = value.split('-').map(Number) as [number, number, number];
+  return makeDate(y, m, d) === value;
+}
+
+/** Day of the month a date falls on, clamped to the month's length (31 April → 30 April). */
+export function clampedDate(year: number, month: number, day: number): IsoDate {
+  const lastDay = new Date(Date.UTC(year, month, 0)).getUTCDate();
+  return makeDate(year, month, Math.min(day, lastDay));
+}
