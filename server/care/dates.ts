@@ -77,3 +77,15 @@ export function clampedDate(year: number, month: number, day: number): IsoDate {
   const lastDay = new Date(Date.UTC(year, month, 0)).getUTCDate();
   return makeDate(year, month, Math.min(day, lastDay));
 }
+
+const MONTH_NAMES = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+
+/**
+ * Advice written for the north, reworded for a southern site: each month name moves six months on.
+ * "June drop" is the trade's name for a stage, not a date, so it becomes a plain description.
+ */
+export function southernMonthWords(text: string): string {
+  return text
+    .replace(/\bJune drop\b/g, 'early-summer fruit drop')
+    .replace(/\b(January|February|March|April|May|June|July|August|September|October|November|December)\b/g, (name) => MONTH_NAMES[(MONTH_NAMES.indexOf(name) + 6) % 12] ?? name);
+}
