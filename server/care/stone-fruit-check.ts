@@ -1,0 +1,263 @@
+import { plantTypeCodes, plantTypeLabels, type PlantTypeCode } from '../schemas/catalogue';
+import { addDays, clampedDate, hemisphereOf, isIsoDate, monthOf, southernMonthWords, type IsoDate } from './dates';
+import { CareInputError } from './degree-days';
+import { catalogue } from './catalogue';
+import { cite, COMMON_PRACTICE, FROM_MEMORY, type SourceLabel } from './sources';
+
+// Is a cut on stone fruit safe on a given day? The rules are those of care-rules.md §3 (PR-1 …
+// PR-18 for the UK, US-1 … US-5 overriding them for the northern US). Silver leaf and bacterial
+// canker get in through fresh wounds; their spores and bacteria are about from September to May,
+// while summer wounds heal fast. Dates are judged by their northern-hemisphere equivalent, so a
+// southern site gets the same answer six months later.
+
+export type StoneFruitSymptom = 'silver-leaf' | 'canker' | 'dead-wood';
+export type StoneFruitProfile = 'uk' | 'us-north';
+export type Verdict = 'ok' | 'caution' | 'avoid';
+/** How one rule bears on the verdict; a note informs without changing it. */
+export type RuleEffect = Verdict | 'note';
+
+export interface StoneFruitCutInput {
+  type: PlantTypeCode;
+  date: IsoDate;
+  latitude: number;
+  ageYears?: number;
+  wet?: boolean;
+  symptoms?: readonly StoneFruitSymptom[];
+  profile?: StoneFruitProfile;
+}
+
+export interface FiredRule {
+  code: string;
+  effect: RuleEffect;
+  message: string;
+  source: string;
+}
+
+export interface StoneFruitCutCheck {
+  applies: boolean;
+  verdict: Verdict;
+  rules: FiredRule[];
+  /** The nearest run of days a cut is ok, starting today when today is ok. */
+  nextSafe?: { from: IsoDate; to: IsoDate };
+}
+
+/** Trees up to this many years after planting get formative pruning (care-rules.md PR-4: years 1–3). */
+export const FORMATIVE_MAX_AGE = 3;
+
+interface Context {
+  type: PlantTypeCode;
+  isYoung: boolean;
+  profile: StoneFruitProfile;
+  symptoms: readonly StoneFruitSymptom[];
+}
+
+type Md = number; // month * 100 + day, northern-hemisphere equivalent
+
+const md = (month: number, day: number): Md => month * 100 + day;
+const between = (x: Md, from: Md, to: Md): boolean => (from <= to ? x >= from && x <= to : x >= from || x <= to);
+
+// Leaf fall to bud burst: "November to early March" (S20); bud burst closes it around 10 March.
+const DORMANT = [md(11, 1), md(3, 10)] as const;
+const SUMMER = [md(6, 1), md(8, 31)] as const;
+const FORMATIVE_SPRING = [md(3, 20), md(4, 30)] as const;
+const SWEET_CHERRY_UK = [md(7, 21), md(8, 31)] as const;
+const SWEET_CHERRY_US = [md(7, 1), md(8, 31)] as const;
+// Calendar stand-ins for stages the US sources name (delayed dormant to early bloom; just before
+// bloom to two weeks after petal fall): the stages are published, these dates are our estimate.
+const US_LATE_DORMANT = [md(3, 15), md(4, 30)] as const;
+const US_PEACH_BLOOM = [md(4, 1), md(5, 15)] as const;
+const LEAF_CURL_SHELTER = [md(11, 1), md(5, 15)] as const;
+
+const isCherry = (t: PlantTypeCode): boolean => t === 'cherry-sweet' || t === 'cherry-sour';
+const isPeach = (t: PlantTypeCode): boolean => t === 'peach' || t === 'nectarine';
+const isPlum = (t: PlantTypeCode): boolean => t === 'plum' || t === 'gage' || t === 'damson';
+
+function fired(code: string, effect: RuleEffect, message: string, labels: readonly SourceLabel[]): FiredRule {
+  return { code, effect, message, source: cite(labels) };
+}
+
+const SEVERITY: Record<RuleEffect, number> = { note: 0, ok: 0, caution: 1, avoid: 2 };
+
+function worst(rules: readonly FiredRule[]): Verdict {
+  const top = Math.max(0, ...rules.map((r) => SEVERITY[r.effect]));
+  return top === 2 ? 'avoid' : top === 1 ? 'caution' : 'ok';
+}
+
+/** The same day of the year half a year on: what a southern date corresponds to in the north. */
+function northernEquivalent(date: IsoDate, latitude: number): Md {
+  const month = monthOf(date);
+  const day = Number(date.slice(8, 10));
+  if (hemisphereOf(latitude) === 'north') return md(month, day);
+  const shifted = ((month + 5) % 12) + 1;
+  // 31 August has no twin in February; a non-leap year keeps the answer the same every year.
+  return md(shifted, Number(clampedDate(2001, shifted, day).slice(8, 10)));
+}
+
+function dormantRules(ctx: Context, x: Md): FiredRule[] {
+  const rules = [
+    fired('PR-1', 'avoid', 'Stone fruit should not be pruned while dormant (leaf fall to bud burst): silver leaf and bacterial canker get in through winter cuts.', ['S3', 'S18', 'S26']),
+    fired('PR-2', 'caution', 'Silver leaf spores are about from September to May.', ['S1']),
+  ];
+  if (ctx.profile === 'us-north' && isPeach(ctx.type) && x < md(4, 1)) {
+    rules.push(fired('US-1', 'avoid', 'Penn State advises no peach pruning from January to March or before the buds swell (Cytospora canker).', ['S54']));
+  }
+  if (x >= md(9, 1)) rules.push(pr10());
+  return rules;
+}
+
+function pr10(): FiredRule {
+  return fired('PR-10', 'caution', 'Aim to finish stone-fruit pruning by the end of August.', ['S7']);
+}
+
+function usOverride(ctx: Context, x: Md): FiredRule | null {
+  if (ctx.profile !== 'us-north') return null;
+  if (isPeach(ctx.type)) {
+    if (between(x, ...US_PEACH_BLOOM)) return fired('US-1', 'ok', 'Peaches are best pruned from just before bloom to two weeks after petal fall (about April to mid-May in the northern US).', ['S54', FROM_MEMORY]);
+    if (x < md(4, 1)) return fired('US-1', 'avoid', 'Penn State advises no peach pruning from January to March or before the buds swell (Cytospora canker).', ['S54']);
+    return null;
+  }
+  if (ctx.type !== 'cherry-sweet' && between(x, ...US_LATE_DORMANT)) {
+    return fired('US-3', 'ok', 'Plums, tart cherries and apricots may be pruned as late as delayed-dormant to early bloom (about mid-March to April).', ['S55', FROM_MEMORY]);
+  }
+  return null;
+}
+
+function springAutumnRules(ctx: Context, x: Md): FiredRule[] {
+  const override = usOverride(ctx, x);
+  if (override) return [override];
+  const rules: FiredRule[] = [];
+  const isRemedial = ctx.symptoms.includes('silver-leaf') || ctx.symptoms.includes('canker');
+  if (ctx.isYoung && !isRemedial && between(x, ...FORMATIVE_SPRING)) {
+    rules.push(fired('PR-4', 'ok', 'Formative pruning of a young tree is done now, at or just after bud burst, rather than in winter.', formativeSources(ctx.type)));
+    return rules;
+  }
+  rules.push(fired('PR-2', 'caution', 'Silver leaf spores are about from September to May; cuts made now are at risk.', ['S1']));
+  if (isPeach(ctx.type) && x < md(6, 1)) rules.push(fired('PR-8', 'note', 'Peaches may be pruned as growth starts in spring, but summer is safer.', ['S26']));
+  if (ctx.profile === 'us-north' && isCherry(ctx.type) && x < md(6, 1)) {
+    rules.push(fired('US-4', 'note', 'Commercial cherry guidance delays pruning to spring (as late as May) and avoids wet wounds.', ['S57', 'S56']));
+  }
+  if (x >= md(9, 1)) rules.push(pr10());
+  return rules;
+}
+
+function formativeSources(type: PlantTypeCode): SourceLabel[] {
+  if (isPlum(type)) return ['S4'];
+  if (type === 'apricot') return ['S18'];
+  if (type === 'cherry-sweet') return ['S21', 'S28'];
+  if (type === 'cherry-sour') return ['S3'];
+  return ['S26'];
+}
+
+function summerRules(ctx: Context, x: Md): FiredRule[] {
+  const isRemedial = ctx.symptoms.includes('silver-leaf') || ctx.symptoms.includes('canker');
+  if (ctx.type === 'cherry-sweet' && !ctx.isYoung && !isRemedial) return [sweetCherrySummer(ctx, x)];
+  const rules = [fired('PR-3', 'ok', 'Summer is the time to prune stone fruit: fewer silver leaf spores, and cuts heal fast.', ['S1'])];
+  if (ctx.isYoung) return rules;
+  if (ctx.type === 'cherry-sour') rules.push(fired('PR-6', 'note', 'The main pruning of acid cherries is in late summer, straight after picking.', ['S3']));
+  if (isPlum(ctx.type)) rules.push(fired('PR-7', 'note', 'Thin a crowded head in July; pyramid plums have their shoots shortened in the third week of July.', ['S4']));
+  if (ctx.type === 'apricot') rules.push(fired('PR-9', 'note', 'Established apricots are pruned in summer.', ['S18']));
+  return rules;
+}
+
+function sweetCherrySummer(ctx: Context, x: Md): FiredRule {
+  if (ctx.profile === 'us-north') {
+    return between(x, ...SWEET_CHERRY_US)
+      ? fired('US-2', 'ok', 'Sweet cherries are pruned after harvest, from early July.', ['S54', 'S55', 'S56'])
+      : fired('US-2', 'caution', 'Sweet cherries are best pruned after harvest, from early July.', ['S54', 'S55', 'S56']);
+  }
+  return between(x, ...SWEET_CHERRY_UK)
+    ? fired('PR-5', 'ok', 'Established sweet cherries are pruned from late July to the end of August, after picking, when silver leaf and canker are least active.', ['S21'])
+    : fired('PR-5', 'caution', 'Established sweet cherries are best pruned from late July to the end of August, after picking, when silver leaf and canker are least active.', ['S21']);
+}
+
+function seasonalRules(ctx: Context, x: Md): FiredRule[] {
+  if (between(x, ...DORMANT)) return dormantRules(ctx, x);
+  if (between(x, ...SUMMER)) return summerRules(ctx, x);
+  return springAutumnRules(ctx, x);
+}
+
+function symptomRules(ctx: Context, x: Md): FiredRule[] {
+  const isSummer = between(x, ...SUMMER);
+  const rules: FiredRule[] = [];
+  if (ctx.symptoms.includes('silver-leaf')) {
+    rules.push(fired('PR-13', isSummer ? 'ok' : 'caution',
+      `Silver leaf: remove the affected branch ${isSummer ? 'now' : 'as soon as it is safe to cut'}, before bracket fungi appear, cutting 10–15 cm beyond the end of the dark stain in the wood. Disinfect tools often and take the prunings off the site straight away.`, ['S1']));
+    rules.push(fired('PR-14', 'note', 'Silvered leaves without a dark stain in the wood are stress (false silver leaf), not the disease: no cut is needed; check watering and cold damage.', ['S1']));
+    rules.push(fired('PR-15', 'note', 'If bracket fungi grow on the main trunk, the whole tree is probably infected: consider taking it out.', [COMMON_PRACTICE, 'S77']));
+  }
+  if (ctx.symptoms.includes('canker')) {
+    const paint = ctx.type === 'apricot' ? ' On apricots, paint the cut promptly.' : '';
+    rules.push(fired('PR-16', isSummer ? 'ok' : 'caution',
+      `Bacterial canker: cut out cankered wood in summer (June to August), well below the visible canker, disinfecting tools between cuts.${paint}`,
+      ctx.type === 'apricot' ? [COMMON_PRACTICE, 'S2', 'S18'] : ctx.profile === 'us-north' ? [COMMON_PRACTICE, 'S2', 'S58'] : [COMMON_PRACTICE, 'S2']));
+  }
+  if (ctx.symptoms.includes('dead-wood')) {
+    rules.push(fired('PR-17', 'note', 'Snapping off wholly dead stubs without wounding live bark is fine at any time; any cut into live wood follows the summer window.', [COMMON_PRACTICE, FROM_MEMORY]));
+  }
+  return rules;
+}
+
+function dayRules(ctx: Context, x: Md): FiredRule[] {
+  return [...seasonalRules(ctx, x), ...symptomRules(ctx, x)];
+}
+
+function notes(ctx: Context, x: Md, verdict: Verdict): FiredRule[] {
+  const rules: FiredRule[] = [];
+  if (isPeach(ctx.type) && between(x, ...LEAF_CURL_SHELTER)) {
+    rules.push(fired('PR-18', 'note', 'On a wall or fence, keep a polythene rain shelter (open at the ends) over the tree from leaf fall until mid-May against peach leaf curl.', ['S9']));
+  }
+  const paintsCanker = ctx.type === 'apricot' && ctx.symptoms.includes('canker');
+  if (verdict !== 'avoid' && !paintsCanker) {
+    rules.push(fired('PR-12', 'note', 'Leave cuts to heal on their own; use wound paint only where silver leaf keeps coming back locally.', ['S1']));
+  }
+  return rules;
+}
+
+function wetRule(profile: StoneFruitProfile): FiredRule {
+  return fired('PR-11', 'caution', 'Prune on a dry day: wet wounds let canker and silver leaf in.', profile === 'us-north' ? ['S7', 'S57', 'S58'] : ['S7']);
+}
+
+function nearestSafe(ctx: Context, from: IsoDate, latitude: number): { from: IsoDate; to: IsoDate } | undefined {
+  const isOk = (date: IsoDate) => worst(dayRules(ctx, northernEquivalent(date, latitude))) === 'ok';
+  let i = 0;
+  while (i <= 366 && !isOk(addDays(from, i))) i++;
+  if (i > 366) return undefined;
+  let j = i;
+  while (j - i <= 366 && isOk(addDays(from, j + 1))) j++;
+  return { from: addDays(from, i), to: addDays(from, j) };
+}
+
+function checkInput(input: StoneFruitCutInput): void {
+  if (!(plantTypeCodes as readonly string[]).includes(input.type)) throw new CareInputError('Choose a plant type from the catalogue.', 'type');
+  if (!isIsoDate(input.date)) throw new CareInputError('Use the form YYYY-MM-DD for the date.', 'date');
+  if (!Number.isFinite(input.latitude) || Math.abs(input.latitude) > 90) throw new CareInputError('Latitude runs from -90 to 90.', 'latitude');
+  if (input.ageYears !== undefined && !(Number.isFinite(input.ageYears) && input.ageYears >= 0)) throw new CareInputError('Age must be a number of years, 0 or more.', 'ageYears');
+}
+
+export function isStoneFruit(type: PlantTypeCode): boolean {
+  return catalogue[type].group === 'stone';
+}
+
+export function checkStoneFruitCut(input: StoneFruitCutInput): StoneFruitCutCheck {
+  checkInput(input);
+  if (!isStoneFruit(input.type)) {
+    const message = `${plantTypeLabels[input.type]} is not stone fruit, so the stone-fruit check does not apply: prune it in its own window.`;
+    return { applies: false, verdict: 'ok', rules: [fired('NOT-STONE', 'note', message, ['S3', 'S18', 'S26'])] };
+  }
+  const ctx: Context = {
+    type: input.type,
+    isYoung: input.ageYears !== undefined && input.ageYears <= FORMATIVE_MAX_AGE,
+    profile: input.profile ?? 'uk',
+    symptoms: input.symptoms ?? [],
+  };
+  const x = northernEquivalent(input.date, input.latitude);
+  const rules = dayRules(ctx, x);
+  if (input.wet) rules.push(wetRule(ctx.profile));
+  const verdict = worst(rules);
+  rules.push(...notes(ctx, x, verdict));
+  // A wet day is judged on the weather; the next safe window then starts tomorrow at the earliest.
+  const nextSafe = nearestSafe(ctx, input.wet ? addDays(input.date, 1) : input.date, input.latitude);
+  // The messages name northern months; a southern grower reads them six months on.
+  const worded = hemisphereOf(input.latitude) === 'south' ? rules.map((r) => ({ ...r, message: southernMonthWords(r.message) })) : rules;
+  return nextSafe ? { applies: true, verdict, rules: worded, nextSafe } : { applies: true, verdict, rules: worded };
+}
