@@ -7,8 +7,8 @@ const thisYear = () => new Date().getUTCFullYear();
 const plantFields = {
   siteId: z.uuid({ message: 'Choose a site' }),
   typeCode: plantTypeCodeSchema,
-  cultivar: z.string().trim().max(100, 'Use at most 100 characters').default(''),
-  rootstock: z.string().trim().max(60, 'Use at most 60 characters').default(''),
+  cultivar: z.string().trim().max(100, 'Use at most 100 characters'),
+  rootstock: z.string().trim().max(60, 'Use at most 60 characters'),
   form: plantFormSchema,
   plantedYear: z
     .number({ message: 'Planted year must be a year such as 2019' })
@@ -23,12 +23,20 @@ const plantFields = {
     .max(30, 'Height must be 30 m or less')
     .nullable()
     .optional(),
-  positionLabel: z.string().trim().max(100, 'Use at most 100 characters').default(''),
-  healthFlags: z.array(healthFlagSchema).max(10).default([]),
-  notes: z.string().trim().max(2000, 'Use at most 2,000 characters').default(''),
+  positionLabel: z.string().trim().max(100, 'Use at most 100 characters'),
+  healthFlags: z.array(healthFlagSchema).max(10),
+  notes: z.string().trim().max(2000, 'Use at most 2,000 characters'),
 };
 
-export const plantCreateSchema = z.object(plantFields);
+// Defaults belong to creation only: on an update a missing field means "leave it as it is".
+export const plantCreateSchema = z.object({
+  ...plantFields,
+  cultivar: plantFields.cultivar.default(''),
+  rootstock: plantFields.rootstock.default(''),
+  positionLabel: plantFields.positionLabel.default(''),
+  healthFlags: plantFields.healthFlags.default([]),
+  notes: plantFields.notes.default(''),
+});
 export type PlantCreate = z.input<typeof plantCreateSchema>;
 
 export const plantUpdateSchema = z.object(plantFields).partial();

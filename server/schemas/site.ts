@@ -18,11 +18,12 @@ const siteFields = {
   longitude: longitudeSchema,
   elevationM: z.number({ message: 'Elevation must be a number of metres' }).min(-430, 'Elevation looks too low').max(5000, 'Elevation looks too high').nullable().optional(),
   timeZone: timeZoneSchema,
-  hazards: z.array(siteHazardSchema).max(siteHazards.length).default([]),
-  notes: z.string().trim().max(2000, 'Use at most 2,000 characters').default(''),
+  hazards: z.array(siteHazardSchema).max(siteHazards.length),
+  notes: z.string().trim().max(2000, 'Use at most 2,000 characters'),
 };
 
-export const siteCreateSchema = z.object(siteFields);
+// Defaults belong to creation only: on an update a missing field means "leave it as it is".
+export const siteCreateSchema = z.object({ ...siteFields, hazards: siteFields.hazards.default([]), notes: siteFields.notes.default('') });
 export type SiteCreate = z.input<typeof siteCreateSchema>;
 
 export const siteUpdateSchema = z.object(siteFields).partial();
