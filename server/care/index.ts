@@ -1,6 +1,7 @@
 // The care engine's public surface: callers import from here, never from the files themselves.
 export * from './dates';
 export * from './degree-days';
+export * from './chill';
 export * from './daylight';
 export * from './ladder';
 export * from './cautions';
