@@ -6,7 +6,8 @@ import { COMMON_PRACTICE, FROM_MEMORY, type SourceLabel } from './sources';
 // Calendar bounds are written for the northern hemisphere (UK lowland timings, as the reference
 // gives them); windows.ts shifts them six months for southern sites. A bound with yearOffset −1
 // falls in the autumn before the season: dormant-season work belongs to the season whose growth
-// it prepares, so a season's winter pruning opens the previous November.
+// it prepares, so a season's winter pruning opens the previous November. A bound on a month's
+// last day means the end of the month (29 February is the end of February in any year).
 //
 // Where the reference gives only a calendar window for a growth stage (shoots stopped growing,
 // June drop over, berries pea-sized) the rule uses a degree-day trigger *derived* from that date:
