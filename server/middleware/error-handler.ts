@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler } from 'express';
+import { CareInputError } from '../care';
 import { AppError } from '../lib/errors';
 import type { ErrorEnvelope } from '../schemas/error';
 
@@ -7,6 +8,8 @@ interface HttpishError { status?: number; statusCode?: number; type?: string; co
 // Errors from body-parser and csrf-sync arrive as plain errors with a status; give them our codes.
 function translate(err: unknown): AppError | null {
   if (err instanceof AppError) return err;
+  // The care engine's own input checks, for anything the zod schemas let through.
+  if (err instanceof CareInputError) return new AppError('VALIDATION_FAILED', 'Some fields need attention', [{ path: err.path, message: err.message }]);
   const e = (err ?? {}) as HttpishError;
   if (e.type === 'entity.parse.failed') return new AppError('VALIDATION_FAILED', 'The request body is not valid JSON', [{ path: '(body)', message: 'Malformed JSON' }]);
   if (e.type === 'entity.too.large') return new AppError('PAYLOAD_TOO_LARGE', 'The request body is too large');

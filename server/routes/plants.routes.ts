@@ -4,11 +4,14 @@ import { requireRole } from '../middleware/require-role';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { plantCreateSchema, plantListQuerySchema, plantUpdateSchema } from '../schemas/plant';
 import * as plants from '../services/plant.service';
+import { plantWindowsRouter } from './plant-windows.routes';
 
 export const plantsRouter = Router({ mergeParams: true });
 
 const plantParams = z.object({ plantId: z.uuid({ message: 'Not a valid plant id' }) }).loose();
 const plantIdOf = (req: Request) => parseParams(req, plantParams).plantId;
+
+plantsRouter.use('/:plantId/windows', plantWindowsRouter);
 
 plantsRouter.get('/', requireRole('viewer'), async (req, res) => {
   res.json(await plants.listPlants(req.membership!.groupId, parseQuery(req, plantListQuerySchema)));
