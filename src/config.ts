@@ -51,8 +51,9 @@ export function plantName(plant: { cultivar: string; typeCode: PlantTypeCode }, 
 }
 
 export function formatCoordinates(latitude: number, longitude: number): string {
-  const lat = `${Math.abs(latitude).toFixed(4)}° ${latitude >= 0 ? 'N' : 'S'}`;
-  const long = `${Math.abs(longitude).toFixed(4)}° ${longitude >= 0 ? 'E' : 'W'}`;
+  // No-break spaces keep "1.8510° W" together when a narrow card wraps the line.
+  const lat = `${Math.abs(latitude).toFixed(4)}°\u00a0${latitude >= 0 ? 'N' : 'S'}`;
+  const long = `${Math.abs(longitude).toFixed(4)}°\u00a0${longitude >= 0 ? 'E' : 'W'}`;
   return `${lat}, ${long}`;
 }
 

@@ -10,6 +10,8 @@ interface FormOptions<V> {
   prepare?: (values: V) => unknown;
   /** Plainer words for a field whose schema message is generic (an enum's "Invalid option", say). */
   messages?: Partial<Record<keyof V & string, string>>;
+  /** Toast title when the server refuses, e.g. "Could not sign in". */
+  failureTitle?: string;
 }
 
 /** "healthFlags.2" and "body.cultivar" both land on the field the person can see. */
@@ -54,7 +56,7 @@ export function useForm<S extends z.ZodType, V extends object>(schema: S, initia
 
   function applyServerError(err: unknown): void {
     if (!(err instanceof ApiError) || err.issues.length === 0) {
-      notify.error(err);
+      notify.error(err, options.failureTitle);
       return;
     }
     const next: FieldErrors = {};
@@ -65,7 +67,7 @@ export function useForm<S extends z.ZodType, V extends object>(schema: S, initia
       else unplaced.push(issue.message);
     }
     errors.value = next;
-    if (unplaced.length > 0 || Object.keys(next).length === 0) notify.error(unplaced.join(' ') || err.message);
+    if (unplaced.length > 0 || Object.keys(next).length === 0) notify.error(new Error(unplaced.join(' ') || err.message), options.failureTitle);
     focusFirstError();
   }
 
