@@ -5,6 +5,7 @@ import { defineConfig } from 'vitest/config';
 // each test file gets a database of its own cloned from a migrated template, so files run in parallel.
 export default defineConfig({
   test: {
+    reporters: ['default', './tests/helpers/summary-reporter.ts'],
     projects: [
       {
         test: {
