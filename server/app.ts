@@ -31,7 +31,15 @@ export function createApp(options: AppOptions = {}): Express {
   app.disable('x-powered-by');
 
   app.use(requestId);
-  app.use(pinoHttp({ logger, genReqId: (req) => (req as express.Request).id, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req) => (req as express.Request).id,
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') || req.url === '/api/health' },
+      // One short line per request; headers (cookies among them) stay out of the logs.
+      serializers: { req: (req) => ({ id: req.id, method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }) },
+    }),
+  );
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -42,6 +50,8 @@ export function createApp(options: AppOptions = {}): Express {
           'upgrade-insecure-requests': config.COOKIE_SECURE ? [] : null,
         },
       },
+      // Only a server behind HTTPS may tell browsers to insist on HTTPS.
+      strictTransportSecurity: config.COOKIE_SECURE,
     }),
   );
   app.use('/api', express.json({ limit: '256kb' }));
