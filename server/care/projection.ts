@@ -1,4 +1,4 @@
-import { addDays, daysBetween, fromUtcMs, hemisphereOf, isLeapYear, makeDate, toUtcMs, type Hemisphere, type IsoDate } from './dates';
+import { addDays, daysBetween, fromUtcMs, hemisphereOf, isIsoDate, isLeapYear, makeDate, toUtcMs, type Hemisphere, type IsoDate } from './dates';
 import { CareInputError, type DailyTemperature } from './degree-days';
 import { FROM_MEMORY } from './sources';
 
@@ -99,13 +99,18 @@ export function checkNormals(normals: readonly MonthlyNormal[]): MonthlyNormal[]
 
 // Midpoints of the months of one calendar year as day offsets from 1 January, with December of the
 // year before and January of the year after on either side, so every day has a pair to sit between.
+const midpointCache = new Map<number, number[]>();
+
 function monthMidpoints(year: number): number[] {
+  const cached = midpointCache.get(year);
+  if (cached) return cached;
   const mids: number[] = [];
   for (let m = 0; m <= 13; m++) {
     const first = daysBetween(makeDate(year, 1, 1), makeDate(year, m, 1));
     const length = daysBetween(makeDate(year, m, 1), makeDate(year, m + 1, 1));
     mids.push(first + (length - 1) / 2);
   }
+  midpointCache.set(year, mids);
   return mids;
 }
 
@@ -144,7 +149,7 @@ export function dailyNormals(from: IsoDate, to: IsoDate, normals: readonly Month
 // expected string is far cheaper than parsing it, and readings usually arrive in order.
 const seasonDateCache = new Map<string, IsoDate[]>();
 
-function seasonDates(start: IsoDate, length: number): IsoDate[] {
+function datesFrom(start: IsoDate, length: number): IsoDate[] {
   const key = `${start}:${length}`;
   let dates = seasonDateCache.get(key);
   if (!dates) {
@@ -155,6 +160,20 @@ function seasonDates(start: IsoDate, length: number): IsoDate[] {
   return dates;
 }
 
+const frameCache = new Map<string, { start: IsoDate; end: IsoDate; dates: IsoDate[] }>();
+
+function seasonFrame(season: number, hemisphere: Hemisphere): { start: IsoDate; end: IsoDate; dates: IsoDate[] } {
+  const key = `${season}:${hemisphere}`;
+  let frame = frameCache.get(key);
+  if (!frame) {
+    const start = seasonStart(season, hemisphere);
+    const end = seasonEnd(season, hemisphere);
+    frame = { start, end, dates: datesFrom(start, daysBetween(start, end) + 1) };
+    frameCache.set(key, frame);
+  }
+  return frame;
+}
+
 function placeReadings(readings: readonly DailyTemperature[], dates: IsoDate[], start: IsoDate, out: SeasonTemperatures): void {
   const length = dates.length;
   let guess = 0;
@@ -162,8 +181,9 @@ function placeReadings(readings: readonly DailyTemperature[], dates: IsoDate[], 
     if (!Number.isFinite(r.tmin)) throw new CareInputError('The minimum temperature must be a number.', `readings.${i}.tmin`);
     if (!Number.isFinite(r.tmax)) throw new CareInputError('The maximum temperature must be a number.', `readings.${i}.tmax`);
     if (r.tmin > r.tmax) throw new CareInputError(`The minimum temperature (${r.tmin}) is above the maximum (${r.tmax}).`, `readings.${i}.tmin`);
-    const index = dates[guess] === r.date ? guess : daysBetween(start, r.date);
-    if (!Number.isFinite(index)) throw new CareInputError('Use the form YYYY-MM-DD for dates.', `readings.${i}.date`);
+    const isExpected = dates[guess] === r.date;
+    if (!isExpected && !isIsoDate(r.date)) throw new CareInputError('Use the form YYYY-MM-DD for dates.', `readings.${i}.date`);
+    const index = isExpected ? guess : daysBetween(start, r.date);
     guess = index + 1;
     if (index < 0 || index >= length) return; // another season's reading: not ours to use
     if (out.isReading[index] === 0) out.readingCount++;
@@ -171,6 +191,24 @@ function placeReadings(readings: readonly DailyTemperature[], dates: IsoDate[], 
     out.tmax[index] = r.tmax;
     out.isReading[index] = 1;
   });
+}
+
+function toArrays(days: { tmin: number[]; tmax: number[] }): { tmin: Float64Array; tmax: Float64Array } {
+  return { tmin: Float64Array.from(days.tmin), tmax: Float64Array.from(days.tmax) };
+}
+
+// Most sites have no normals of their own, and the default season is the same for all of them in a
+// hemisphere: fill it once and copy it.
+const defaultSeasonCache = new Map<string, { tmin: Float64Array; tmax: Float64Array }>();
+
+function defaultSeason(start: IsoDate, end: IsoDate, latitude: number): { tmin: Float64Array; tmax: Float64Array } {
+  const key = `${start}:${end}`;
+  let season = defaultSeasonCache.get(key);
+  if (!season) {
+    season = toArrays(dailyNormals(start, end, defaultNormals(latitude)));
+    defaultSeasonCache.set(key, season);
+  }
+  return season;
 }
 
 export interface ProjectionInput {
@@ -185,20 +223,17 @@ export function projectSeason(input: ProjectionInput): SeasonTemperatures {
   checkSeason(input.season);
   if (!Number.isFinite(input.latitude) || Math.abs(input.latitude) > 90) throw new CareInputError('Latitude runs from -90 to 90.', 'latitude');
   const hemisphere = hemisphereOf(input.latitude);
-  const start = seasonStart(input.season, hemisphere);
-  const end = seasonEnd(input.season, hemisphere);
-  const dates = seasonDates(start, daysBetween(start, end) + 1);
+  const { start, end, dates } = seasonFrame(input.season, hemisphere);
   const hasSiteNormals = input.normals !== undefined && input.normals.length > 0;
-  const normals = hasSiteNormals ? (input.normals as readonly MonthlyNormal[]) : defaultNormals(input.latitude);
-  const filled = dailyNormals(start, end, normals);
+  const filled = hasSiteNormals ? toArrays(dailyNormals(start, end, input.normals as readonly MonthlyNormal[])) : defaultSeason(start, end, input.latitude);
   const out: SeasonTemperatures = {
     season: input.season,
     hemisphere,
     start,
     end,
     length: dates.length,
-    tmin: Float64Array.from(filled.tmin),
-    tmax: Float64Array.from(filled.tmax),
+    tmin: filled.tmin.slice(),
+    tmax: filled.tmax.slice(),
     isReading: new Uint8Array(dates.length),
     readingCount: 0,
     normalsOrigin: hasSiteNormals ? 'site' : 'default',
@@ -208,9 +243,14 @@ export function projectSeason(input: ProjectionInput): SeasonTemperatures {
   return out;
 }
 
+/** The season's dates in order, one per day (shared: do not change the array). */
+export function seasonDateList(series: SeasonTemperatures): readonly IsoDate[] {
+  return datesFrom(series.start, series.length);
+}
+
 /** The season day by day, saying for each whether it was read or projected. */
 export function seasonDays(series: SeasonTemperatures): SeasonDay[] {
-  return seasonDates(series.start, series.length).map((date, i) => ({
+  return datesFrom(series.start, series.length).map((date, i) => ({
     date,
     tmin: series.tmin[i] as number,
     tmax: series.tmax[i] as number,
