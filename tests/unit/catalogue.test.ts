@@ -5,7 +5,7 @@ import {
   type TaskCode, type TaskRule,
 } from '../../server/care/catalogue';
 import { COMMON_PRACTICE, FROM_MEMORY, cite, describeSource, isSourceKey, sources } from '../../server/care/sources';
-import { calendarDate, siteSeason } from '../../server/care/windows';
+import { calendarDate, siteSeason, triggerOutcome } from '../../server/care/windows';
 import { daysBetween } from '../../server/care/dates';
 import { degreeDaysToCelsius, fahrenheitToCelsius } from '../../server/care/degree-days';
 
@@ -121,7 +121,7 @@ describe('catalogue — degree-day triggers', () => {
     (_id, trigger) => {
       for (const season of [2023, 2024, 2025]) {
         const ss = siteSeason({ latitude: 51.5, longitude: -0.1 }, season);
-        const outcome = ss.triggers.get(trigger.id);
+        const outcome = triggerOutcome(ss, trigger.id);
         const target = calendarDate({ ...(trigger.calibratedTo ?? { month: 1, day: 1 }), yearOffset: 0 }, season, 'north');
         expect(outcome?.reachedOn).toBeDefined();
         expect(Math.abs(daysBetween(target, outcome?.reachedOn ?? '1900-01-01'))).toBeLessThanOrEqual(3);
