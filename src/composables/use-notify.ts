@@ -34,7 +34,9 @@ export function useNotify() {
       toast.add({ severity: 'info', summary, detail, life: 5000 });
     },
     error(err: unknown, summary = 'That did not work') {
-      toast.add({ severity: 'error', summary, detail: describeError(err), life: 8000 });
+      // Only the newest problem is shown: ten failed taps should not stack ten red boxes.
+      toast.removeGroup('error');
+      toast.add({ group: 'error', severity: 'error', summary, detail: describeError(err), life: 8000 });
     },
     undoable(text: string, undo: () => Promise<void>) {
       const detail: UndoDetail = { text, undo };
