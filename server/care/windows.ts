@@ -81,6 +81,8 @@ export interface SiteSeason {
   triggers: Map<string, TriggerOutcome>;
   /** Each type's prepared windows at this site, looked up on first use (shared, never changed). */
   siteWindows: Map<string, PreparedWindow[]>;
+  /** Calendar-only windows by type, one map shared by every site of the season and hemisphere. */
+  calendar: Map<string, PreparedWindow[]>;
 }
 
 /** A rule's window worked out for a season, before a plant and a day are known. Never changed once built. */
@@ -227,7 +229,8 @@ function projectedPrefix(temps: SeasonTemperatures): Int32Array {
  */
 export function siteSeason(site: SiteInput, season: number, readings?: readonly DailyTemperature[], normals?: readonly MonthlyNormal[]): SiteSeason {
   const temperatures = projectSeason({ season, latitude: site.latitude, ...(readings ? { readings } : {}), ...(normals ? { normals } : {}) });
-  return { season, hemisphere: temperatures.hemisphere, temperatures, cumulative: new Map(), triggers: new Map(), siteWindows: new Map() };
+  const { hemisphere } = temperatures;
+  return { season, hemisphere, temperatures, cumulative: new Map(), triggers: new Map(), siteWindows: new Map(), calendar: calendarMap(season, hemisphere) };
 }
 
 // The prefix counts of projected days, kept per season object without widening its public shape.
@@ -391,14 +394,23 @@ const siteRules = new Map<PlantTypeCode, TaskRule[]>(plantTypeCodes.map((code) =
 
 // Calendar-only windows are the same for every site in a hemisphere, so they are prepared once per
 // (season, hemisphere, type) for the whole process; only degree-day windows are prepared per site.
-const calendarCache = new Map<string, PreparedWindow[]>();
+const calendarMaps = new Map<string, Map<string, PreparedWindow[]>>();
 
-function calendarWindows(type: PlantTypeCode, season: number, hemisphere: Hemisphere): PreparedWindow[] {
-  const key = `${season}:${hemisphere}:${type}`;
-  let list = calendarCache.get(key);
+function calendarMap(season: number, hemisphere: Hemisphere): Map<string, PreparedWindow[]> {
+  const key = `${season}:${hemisphere}`;
+  let map = calendarMaps.get(key);
+  if (!map) {
+    map = new Map();
+    calendarMaps.set(key, map);
+  }
+  return map;
+}
+
+function calendarWindows(type: PlantTypeCode, ss: SiteSeason): PreparedWindow[] {
+  let list = ss.calendar.get(type);
   if (!list) {
-    list = catalogue[type].rules.filter((r) => !usesDegreeDays(r)).map((r) => prepare(r, null, season, hemisphere)).sort(byOpening);
-    calendarCache.set(key, list);
+    list = catalogue[type].rules.filter((r) => !usesDegreeDays(r)).map((r) => prepare(r, null, ss.season, ss.hemisphere)).sort(byOpening);
+    ss.calendar.set(type, list);
   }
   return list;
 }
@@ -424,19 +436,15 @@ function siteListKey(type: PlantTypeCode, ss: SiteSeason): string {
 }
 
 function preparedFor(type: PlantTypeCode, ss: SiteSeason): PreparedWindow[] {
+  const own = siteRules.get(type) ?? [];
+  if (own.length === 0) return calendarWindows(type, ss);
   let list = ss.siteWindows.get(type);
   if (!list) {
-    const own = siteRules.get(type) ?? [];
-    if (own.length === 0) {
-      list = calendarWindows(type, ss.season, ss.hemisphere);
-      ss.siteWindows.set(type, list);
-      return list;
-    }
     const key = siteListKey(type, ss);
     list = sharedLists.get(key);
     if (!list) {
       const site = own.map((r) => prepare(r, ss, ss.season, ss.hemisphere));
-      list = [...calendarWindows(type, ss.season, ss.hemisphere), ...site].sort(byOpening);
+      list = [...calendarWindows(type, ss), ...site].sort(byOpening);
       if (sharedLists.size >= SHARED_LIST_LIMIT) sharedLists.clear();
       sharedLists.set(key, list);
     }
