@@ -1,17 +1,20 @@
 import type { Sequelize } from 'sequelize';
+import { CareWindow } from './care-window.model';
 import { Group } from './group.model';
 import { Membership } from './membership.model';
 import { OutboxMessage } from './outbox-message.model';
 import { PasswordResetToken } from './password-reset-token.model';
 import { Plant } from './plant.model';
 import { Site } from './site.model';
+import { SiteNormal } from './site-normal.model';
+import { SiteReading } from './site-reading.model';
 import { User } from './user.model';
 
-export { Group, Membership, OutboxMessage, PasswordResetToken, Plant, Site, User };
+export { CareWindow, Group, Membership, OutboxMessage, PasswordResetToken, Plant, Site, SiteNormal, SiteReading, User };
 
 // Define every model first, then associate, so no association refers to a model not yet initialised.
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage]) model.initModel(sequelize);
+  for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage, CareWindow, SiteReading, SiteNormal]) model.initModel(sequelize);
 
   Group.hasMany(Membership, { foreignKey: 'groupId', as: 'memberships' });
   Membership.belongsTo(Group, { foreignKey: 'groupId', as: 'group' });
@@ -19,4 +22,6 @@ export function initModels(sequelize: Sequelize): void {
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Site.hasMany(Plant, { foreignKey: 'siteId', as: 'plants' });
   Plant.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+  Plant.hasMany(CareWindow, { foreignKey: 'plantId', as: 'careWindows' });
+  CareWindow.belongsTo(Plant, { foreignKey: 'plantId', as: 'plant' });
 }
