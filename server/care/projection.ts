@@ -174,23 +174,30 @@ function seasonFrame(season: number, hemisphere: Hemisphere): { start: IsoDate; 
   return frame;
 }
 
+function checkReading(r: DailyTemperature, i: number): void {
+  if (!Number.isFinite(r.tmin)) throw new CareInputError('The minimum temperature must be a number.', `readings.${i}.tmin`);
+  if (!Number.isFinite(r.tmax)) throw new CareInputError('The maximum temperature must be a number.', `readings.${i}.tmax`);
+  if (r.tmin > r.tmax) throw new CareInputError(`The minimum temperature (${r.tmin}) is above the maximum (${r.tmax}).`, `readings.${i}.tmin`);
+}
+
 function placeReadings(readings: readonly DailyTemperature[], dates: IsoDate[], start: IsoDate, out: SeasonTemperatures): void {
   const length = dates.length;
   let guess = 0;
-  readings.forEach((r, i) => {
-    if (!Number.isFinite(r.tmin)) throw new CareInputError('The minimum temperature must be a number.', `readings.${i}.tmin`);
-    if (!Number.isFinite(r.tmax)) throw new CareInputError('The maximum temperature must be a number.', `readings.${i}.tmax`);
-    if (r.tmin > r.tmax) throw new CareInputError(`The minimum temperature (${r.tmin}) is above the maximum (${r.tmax}).`, `readings.${i}.tmin`);
+  // A plain loop: this runs for every reading of every site, and readings usually come in date
+  // order, so the expected date is tried before any parsing.
+  for (let i = 0; i < readings.length; i++) {
+    const r = readings[i] as DailyTemperature;
+    checkReading(r, i);
     const isExpected = dates[guess] === r.date;
     if (!isExpected && !isIsoDate(r.date)) throw new CareInputError('Use the form YYYY-MM-DD for dates.', `readings.${i}.date`);
     const index = isExpected ? guess : daysBetween(start, r.date);
     guess = index + 1;
-    if (index < 0 || index >= length) return; // another season's reading: not ours to use
+    if (index < 0 || index >= length) continue; // another season's reading: not ours to use
     if (out.isReading[index] === 0) out.readingCount++;
     out.tmin[index] = r.tmin;
     out.tmax[index] = r.tmax;
     out.isReading[index] = 1;
-  });
+  }
 }
 
 function toArrays(days: { tmin: number[]; tmax: number[] }): { tmin: Float64Array; tmax: Float64Array } {
