@@ -147,8 +147,14 @@ describe('bad input', () => {
     expect((caught as CareInputError).path).toBe('readings.1.tmin');
   });
 
+  it('rejects a reading that is not a finite number', () => {
+    expect(() => projectSeason({ season: 2025, latitude: 52, readings: [{ date: '2025-01-01', tmin: 1, tmax: Number.POSITIVE_INFINITY }] })).toThrow(CareInputError);
+    expect(() => projectSeason({ season: 2025, latitude: 52, readings: [{ date: '2025-01-01', tmin: Number.NaN, tmax: 3 }] })).toThrow(CareInputError);
+  });
+
   it('rejects a reading with a date that is not a date', () => {
     expect(() => projectSeason({ season: 2025, latitude: 52, readings: [{ date: 'yesterday', tmin: 1, tmax: 2 }] })).toThrow(/YYYY-MM-DD/);
+    expect(() => projectSeason({ season: 2025, latitude: 52, readings: [{ date: '2025-02-30', tmin: 1, tmax: 2 }] })).toThrow(/YYYY-MM-DD/);
   });
 
   it('rejects normals that miss or repeat a month', () => {
