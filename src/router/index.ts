@@ -29,6 +29,9 @@ export const router = createRouter({
     { path: '/sites', name: 'sites', component: () => import('../views/SitesView.vue'), meta: { requiresAuth: true, requiresGroup: true, title: 'Sites' } },
     { path: '/sites/:siteId', name: 'site', component: () => import('../views/SiteView.vue'), props: true, meta: { requiresAuth: true, requiresGroup: true, title: 'Site' } },
     { path: '/tools', name: 'tools', component: () => import('../views/ToolsView.vue'), meta: { title: 'Tools' } },
+    { path: '/tools/stone-fruit-check', name: 'tool-stone-fruit', component: () => import('../views/ToolStoneFruitView.vue'), meta: { title: 'Stone-fruit check' } },
+    { path: '/tools/ladder', name: 'tool-ladder', component: () => import('../views/ToolLadderView.vue'), meta: { title: 'Ladder planner' } },
+    { path: '/tools/degree-days', name: 'tool-degree-days', component: () => import('../views/ToolDegreeDaysView.vue'), meta: { title: 'Degree-day calculator' } },
     { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { title: 'Not found' } },
   ],
 });
