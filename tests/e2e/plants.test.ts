@@ -9,7 +9,7 @@ afterEach(async () => {
 
 // PrimeVue's Select is a combobox labelled by its field label; its options open in an overlay.
 async function choose(page: Browser['page'], label: string, option: string) {
-  await page.getByRole('combobox', { name: label }).click();
+  await page.getByRole('dialog').getByRole('combobox', { name: label }).click();
   await page.getByRole('option', { name: option, exact: true }).click();
 }
 
@@ -18,7 +18,7 @@ describe('the register of plants', () => {
     browser = await openBrowser('desktop');
     const { page } = browser;
     await signIn(page, 'owner@example.org');
-    const table = page.getByRole('table');
+    const table = page.getByRole('table', { name: 'Plants' });
     await table.getByText('Egremont Russet').waitFor();
     await screenshot(page, 'desktop-plants');
 
@@ -47,10 +47,10 @@ describe('the register of plants', () => {
     browser = await openBrowser('desktop');
     const { page } = browser;
     await signIn(page, 'viewer@example.org');
-    await page.getByRole('table').getByText('Egremont Russet').waitFor();
+    await page.getByRole('table', { name: 'Plants' }).getByText('Egremont Russet').waitFor();
     expect(await page.getByRole('button', { name: 'Add plant' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /^(Edit|Archive) / }).count()).toBe(0);
-    await page.getByRole('table').getByText('Egremont Russet').click();
+    await page.getByRole('table', { name: 'Plants' }).getByText('Egremont Russet').click();
     await page.getByRole('heading', { name: /Egremont Russet/ }).waitFor();
     expect(await page.getByRole('button', { name: /Edit|Archive/ }).count()).toBe(0);
   });
