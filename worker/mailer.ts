@@ -1,6 +1,6 @@
 import nodemailer from 'nodemailer';
 
-export interface OutgoingMail { to: string; subject: string; text: string; html: string; messageId?: string }
+export interface OutgoingMail { to: string; subject: string; text: string; html: string; messageId?: string; headers?: Record<string, string> }
 export interface Mailer { send(mail: OutgoingMail): Promise<void>; close(): void }
 
 export function createMailer(smtpUrl: string, from: string): Mailer {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { WindowBasis } from '../care/windows';
+import type { WindowBasis } from '../care';
 
 // A plant's care window for one season, stored by the worker's daily pass (it writes in bulk with
 // SQL; this model is for reading and for the work log, which sets doneAt and doneBy). Dates are

@@ -1,4 +1,4 @@
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { OutboxMessage } from '../models';
 import type { MailKind, MailPayload } from '../schemas/mail';
 
@@ -14,4 +14,26 @@ export async function enqueueMail<K extends MailKind>(
     [{ deliveryKey: message.deliveryKey, kind: message.kind, toAddress: message.to, payload: message.payload, lockedUntil: null, lastError: null, sentAt: null }],
     { ignoreDuplicates: true, transaction },
   );
+}
+
+/**
+ * Queues many messages in one statement (the reminder worker's digests). Answers the delivery keys
+ * that were new: a key already queued, by this worker earlier or by another one, is left as it was.
+ */
+export async function enqueueMails<K extends MailKind>(
+  messages: { deliveryKey: string; kind: K; to: string; payload: MailPayload<K> }[],
+  transaction?: Transaction,
+): Promise<Set<string>> {
+  if (!messages.length) return new Set();
+  const rows = await OutboxMessage.sequelize!.query<{ delivery_key: string }>(
+    `INSERT INTO outbox_messages (delivery_key, kind, to_address, payload)
+     SELECT * FROM unnest($1::text[], $2::text[], $3::text[], $4::jsonb[])
+     ON CONFLICT (delivery_key) DO NOTHING RETURNING delivery_key`,
+    {
+      bind: [messages.map((m) => m.deliveryKey), messages.map((m) => m.kind), messages.map((m) => m.to), messages.map((m) => JSON.stringify(m.payload))],
+      transaction,
+      type: QueryTypes.SELECT,
+    },
+  );
+  return new Set(rows.map((r) => r.delivery_key));
 }

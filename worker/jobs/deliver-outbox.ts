@@ -2,7 +2,15 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import type { Mailer } from '../mailer';
 import { renderMail } from '../mail/render';
 
-export interface DeliverOutboxDeps { db: Sequelize; mailer: Mailer; now?: () => Date; batchSize?: number; log?: (msg: string, extra?: object) => void }
+export interface DeliverOutboxDeps {
+  db: Sequelize;
+  mailer: Mailer;
+  now?: () => Date;
+  batchSize?: number;
+  log?: (msg: string, extra?: object) => void;
+  /** Called once a message is recorded as sent (the crash test pauses here). */
+  afterSent?: (sentSoFar: number) => Promise<void>;
+}
 
 export const MAX_ATTEMPTS = 8;
 // A claim lasts this long; a worker that dies mid-send leaves its rows to be claimed again after it.
@@ -17,7 +25,7 @@ interface ClaimedRow { id: string; delivery_key: string; kind: string; to_addres
  * Claims due messages with SKIP LOCKED (so any number of workers share the queue without sending a
  * message twice), sends each, and records the outcome. Returns how many were sent and failed.
  */
-export async function run({ db, mailer, now = () => new Date(), batchSize = 50, log = () => {} }: DeliverOutboxDeps) {
+export async function run({ db, mailer, now = () => new Date(), batchSize = 50, log = () => {}, afterSent }: DeliverOutboxDeps) {
   const claimed = await db.query<ClaimedRow>(
     `UPDATE outbox_messages SET status = 'sending', attempts = attempts + 1, locked_until = :now::timestamptz + make_interval(secs => :claim), updated_at = now()
      WHERE id IN (
@@ -44,7 +52,9 @@ export async function run({ db, mailer, now = () => new Date(), batchSize = 50, 
            next_attempt_at = :now::timestamptz + make_interval(secs => :wait) WHERE id = :id`,
         { replacements: { id: row.id, status: giveUp ? 'failed' : 'pending', error: String(err).slice(0, 2000), now: now().toISOString(), wait: backoffSeconds(row.attempts) } },
       );
+      continue;
     }
+    await afterSent?.(sent);
   }
   return { claimed: claimed.length, sent, failed };
 }

@@ -4,7 +4,7 @@
 export const escapeHtml = (value: string) =>
   value.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 
-export interface RenderedMail { subject: string; text: string; html: string }
+export interface RenderedMail { subject: string; text: string; html: string; headers?: Record<string, string> }
 
 export function frame(subject: string, textBody: string, htmlBody: string): RenderedMail {
   const text = `${textBody}\n\n--\nSpurwood: care windows for fruit trees, bushes, canes and vines.\n`;

@@ -1,9 +1,11 @@
 import { mailPayloadSchemas, type MailKind } from '../../server/schemas/mail';
 import type { RenderedMail } from './layout';
 import { renderPasswordReset } from './password-reset';
+import { renderReminderDigest } from './reminder-digest';
 
 const renderers: { [K in MailKind]: (payload: never) => RenderedMail } = {
   'password-reset': renderPasswordReset,
+  'reminder-digest': renderReminderDigest,
 };
 
 /** Renders a queued message; a payload that no longer matches its schema is an error to record, not to send. */

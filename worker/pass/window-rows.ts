@@ -1,0 +1,94 @@
+import { createHash } from 'node:crypto';
+import { siteSeason, windowsForPlant, type DailyTemperature, type IsoDate, type MonthlyNormal, type PlantInput } from '../../server/care';
+import type { HealthFlag, PlantForm, PlantTypeCode } from '../../server/schemas/catalogue';
+import { seasonsToRefresh } from './calendar';
+
+// Turns one site's plants into care-window rows with the engine: siteSeason() once per site and
+// season, windowsForPlant() per plant. Rows are kept column by column, ready for one bulk upsert.
+
+export interface PassSite { id: string; groupId: string; latitude: number; longitude: number; timeZone: string }
+export interface PassPlant { id: string; groupId: string; siteId: string; typeCode: PlantTypeCode; form: PlantForm; plantedYear: number | null; healthFlags: HealthFlag[] }
+export interface Climate { readings: DailyTemperature[]; normals: MonthlyNormal[] }
+
+export class WindowColumns {
+  readonly plantId: string[] = [];
+  readonly groupId: string[] = [];
+  readonly siteId: string[] = [];
+  readonly season: number[] = [];
+  readonly task: string[] = [];
+  readonly ruleKey: string[] = [];
+  readonly opens: string[] = [];
+  readonly closes: string[] = [];
+  readonly basis: string[] = [];
+  readonly source: string[] = [];
+  readonly reason: string[] = [];
+  readonly detail: (string | null)[] = [];
+  readonly triggerDegreeDays: (number | null)[] = [];
+  readonly triggerBase: (number | null)[] = [];
+  readonly triggerSince: (string | null)[] = [];
+  readonly triggerReachedOn: (string | null)[] = [];
+
+  get length(): number {
+    return this.plantId.length;
+  }
+
+  /** Appends another site's rows (used to gather the changed sites of a batch). */
+  append(other: WindowColumns): void {
+    for (const key of Object.keys(this) as (keyof WindowColumns)[]) {
+      const mine = this[key] as unknown[];
+      for (const value of other[key] as unknown[]) mine.push(value);
+    }
+  }
+}
+
+// Window texts repeat across every plant of a type at a site (the engine shares them), so each
+// distinct text is hashed once and the fingerprint mixes in the short hash.
+const textHashes = new Map<string, string>();
+function textHash(text: string | undefined): string {
+  if (text === undefined) return '-';
+  let hash = textHashes.get(text);
+  if (hash === undefined) {
+    if (textHashes.size > 20_000) textHashes.clear();
+    hash = createHash('sha1').update(text).digest('base64').slice(0, 12);
+    textHashes.set(text, hash);
+  }
+  return hash;
+}
+
+export interface SiteWindows { columns: WindowColumns; seasons: number[]; fingerprint: string }
+
+/** Readings after `date` are left out, so a pass "as if on" a past day sees what was known then. */
+export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<number, Climate>, date: IsoDate): SiteWindows {
+  const columns = new WindowColumns();
+  const hash = createHash('sha1');
+  const seasons = seasonsToRefresh(date, site.latitude);
+  for (const season of seasons) {
+    const climate = climates.get(season) ?? { readings: [], normals: [] };
+    const known = climate.readings.length && (climate.readings.at(-1) as DailyTemperature).date > date ? climate.readings.filter((r) => r.date <= date) : climate.readings;
+    const ss = siteSeason(site, season, known, climate.normals);
+    for (const plant of plants) {
+      const input: PlantInput = { typeCode: plant.typeCode, form: plant.form, plantedYear: plant.plantedYear, healthFlags: plant.healthFlags };
+      for (const w of windowsForPlant(input, ss, date)) {
+        const t = w.triggeredBy;
+        columns.plantId.push(plant.id);
+        columns.groupId.push(plant.groupId);
+        columns.siteId.push(site.id);
+        columns.season.push(season);
+        columns.task.push(w.task);
+        columns.ruleKey.push(w.key);
+        columns.opens.push(w.opens);
+        columns.closes.push(w.closes);
+        columns.basis.push(w.basis);
+        columns.source.push(w.source);
+        columns.reason.push(w.reason);
+        columns.detail.push(w.detail ?? null);
+        columns.triggerDegreeDays.push(t ? t.degreeDays : null);
+        columns.triggerBase.push(t ? t.base : null);
+        columns.triggerSince.push(t ? t.since : null);
+        columns.triggerReachedOn.push(t?.reachedOn ?? null);
+        hash.update(`${plant.id}${plant.groupId}${season}${w.key}${w.task}${w.opens}${w.closes}${w.basis}${textHash(w.reason)}${textHash(w.source)}${textHash(w.detail)}${t?.degreeDays ?? ''}${t?.reachedOn ?? ''}\n`);
+      }
+    }
+  }
+  return { columns, seasons, fingerprint: `${seasons.join(',')}:${columns.length}:${hash.digest('base64')}` };
+}

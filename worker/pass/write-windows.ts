@@ -1,0 +1,65 @@
+import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { WindowColumns } from './window-rows';
+
+// Bulk writes of care windows: one multi-row upsert per chunk (arrays unnested on the server), so
+// a batch of sites costs a handful of round trips however many plants it holds.
+
+const CHUNK = 10_000;
+
+const slice = <T>(values: T[], from: number) => values.slice(from, from + CHUNK);
+
+/**
+ * Inserts new windows and updates the ones whose dates or words changed; an unchanged row is left
+ * alone, so its id, done_at and computed_at stay as they were. Answers rows written per site.
+ */
+export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColumns): Promise<Map<string, number>> {
+  const written = new Map<string, number>();
+  for (let from = 0; from < c.length; from += CHUNK) {
+    const rows = await db.query<{ site_id: string; n: string }>(
+      `WITH written AS (
+         INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source, reason, detail,
+           trigger_degree_days, trigger_base_c, trigger_since, trigger_reached_on, computed_at)
+         SELECT w.*, now() FROM unnest($1::uuid[], $2::uuid[], $3::uuid[], $4::int[], $5::text[], $6::text[], $7::date[], $8::date[],
+           $9::text[], $10::text[], $11::text[], $12::text[], $13::real[], $14::real[], $15::date[], $16::date[]) AS w
+         ON CONFLICT (plant_id, season, rule_key) DO UPDATE SET
+           group_id = EXCLUDED.group_id, site_id = EXCLUDED.site_id, task = EXCLUDED.task, opens = EXCLUDED.opens, closes = EXCLUDED.closes,
+           basis = EXCLUDED.basis, source = EXCLUDED.source, reason = EXCLUDED.reason, detail = EXCLUDED.detail,
+           trigger_degree_days = EXCLUDED.trigger_degree_days, trigger_base_c = EXCLUDED.trigger_base_c,
+           trigger_since = EXCLUDED.trigger_since, trigger_reached_on = EXCLUDED.trigger_reached_on,
+           computed_at = EXCLUDED.computed_at, updated_at = now()
+         WHERE (care_windows.group_id, care_windows.site_id, care_windows.task, care_windows.opens, care_windows.closes, care_windows.basis,
+                care_windows.source, care_windows.reason, care_windows.detail, care_windows.trigger_degree_days, care_windows.trigger_reached_on)
+           IS DISTINCT FROM (EXCLUDED.group_id, EXCLUDED.site_id, EXCLUDED.task, EXCLUDED.opens, EXCLUDED.closes, EXCLUDED.basis,
+                EXCLUDED.source, EXCLUDED.reason, EXCLUDED.detail, EXCLUDED.trigger_degree_days, EXCLUDED.trigger_reached_on)
+         RETURNING site_id)
+       SELECT site_id, count(*) AS n FROM written GROUP BY site_id`,
+      {
+        bind: [
+          slice(c.plantId, from), slice(c.groupId, from), slice(c.siteId, from), slice(c.season, from), slice(c.task, from), slice(c.ruleKey, from),
+          slice(c.opens, from), slice(c.closes, from), slice(c.basis, from), slice(c.source, from), slice(c.reason, from), slice(c.detail, from),
+          slice(c.triggerDegreeDays, from), slice(c.triggerBase, from), slice(c.triggerSince, from), slice(c.triggerReachedOn, from),
+        ],
+        transaction: t,
+        type: QueryTypes.SELECT,
+      },
+    );
+    for (const r of rows) written.set(r.site_id, (written.get(r.site_id) ?? 0) + Number(r.n));
+  }
+  return written;
+}
+
+/**
+ * Removes windows a refreshed site no longer has (a plant archived or moved, its form changed, a
+ * rule withdrawn). A window someone marked done stays, because the work log points at it.
+ */
+export async function deleteStaleWindows(db: Sequelize, t: Transaction, c: WindowColumns, refreshed: { siteId: string; season: number }[]): Promise<void> {
+  if (!refreshed.length) return;
+  await db.query(
+    `DELETE FROM care_windows cw
+     WHERE (cw.site_id, cw.season) IN (SELECT * FROM unnest($1::uuid[], $2::int[]))
+       AND cw.done_at IS NULL
+       AND NOT EXISTS (SELECT 1 FROM unnest($3::uuid[], $4::int[], $5::text[]) AS k(plant_id, season, rule_key)
+                       WHERE k.plant_id = cw.plant_id AND k.season = cw.season AND k.rule_key = cw.rule_key)`,
+    { bind: [refreshed.map((r) => r.siteId), refreshed.map((r) => r.season), c.plantId, c.season, c.ruleKey], transaction: t },
+  );
+}
