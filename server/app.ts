@@ -16,6 +16,7 @@ import { authRouter } from './routes/auth.routes';
 import { groupsRouter } from './routes/groups.routes';
 import { healthRouter } from './routes/health.routes';
 import { toolsRouter } from './routes/tools.routes';
+import { toolsLimit } from './middleware/tools-limit';
 
 export interface AppOptions {
   /** Pool for the session store; the app makes its own from DATABASE_URL when none is given. */
@@ -57,7 +58,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api', express.json({ limit: '256kb' }));
 
   app.use('/api/health', healthRouter);
-  app.use('/api/tools', toolsRouter);
+  app.use('/api/tools', toolsLimit, toolsRouter);
 
   app.use('/api', sessionMiddleware(options.sessionPool ?? new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 })));
   app.use('/api', passport.session());

@@ -24,6 +24,8 @@ export interface RequestOptions {
   query?: Query;
   /** Sign-in and the first "who am I" expect a 401 and must not bounce the person to sign-in. */
   isUnauthenticatedExpected?: boolean;
+  /** The public tools change nothing on the server, so they need no session and no CSRF token. */
+  isStateless?: boolean;
 }
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
@@ -96,7 +98,7 @@ const isCsrfFailure = (error: ApiError) => error.status === 403 && /csrf/i.test(
 
 export async function request<T>(method: Method, path: string, options: RequestOptions = {}): Promise<T> {
   const url = buildUrl(path, options.query);
-  const isWrite = method !== 'GET';
+  const isWrite = method !== 'GET' && !options.isStateless;
   const token = isWrite ? (csrfToken ?? (await fetchCsrfToken())) : null;
   let response = await send(method, url, options.body, token);
   let payload = await readJson(response);

@@ -34,12 +34,3 @@ export const archivePlant = (groupId: string, plantId: string) => http.post<Plan
 export const restorePlant = (groupId: string, plantId: string) => http.post<Plant>(`${one(groupId, plantId)}/restore`);
 
 export const deletePlant = (groupId: string, plantId: string) => http.delete(one(groupId, plantId));
-
-/** The window shapes belong to the care engine, which is still being built; PlantWindows types them later. */
-export interface PlantWindowsAnswer {
-  windows: unknown[];
-  stoneFruitCheck: unknown;
-}
-
-export const getPlantWindows = (groupId: string, plantId: string, query: { season?: number; on?: string } = {}) =>
-  http.get<PlantWindowsAnswer>(`${one(groupId, plantId)}/windows`, query);
