@@ -4,7 +4,8 @@
 //
 // Test-only flags: --batch-size N (sites per transaction), --now ISO (the clock for due sites and
 // for delivery), --pause-at batch:N | sent:N (print "PAUSED …" and hang there, so a test can kill
-// the process at a known point of the pass).
+// the process at a known point of the pass), --start-at ISO (wait until then after start-up, so two
+// processes begin their passes at the same moment).
 import { parseArgs } from 'node:util';
 import { config } from '../server/config';
 import { sequelize } from '../server/db';
@@ -15,7 +16,7 @@ import * as dailyPass from './jobs/run-daily-pass';
 import { createMailer } from './mailer';
 
 const { values } = parseArgs({
-  options: { date: { type: 'string' }, 'batch-size': { type: 'string' }, now: { type: 'string' }, 'pause-at': { type: 'string' } },
+  options: { date: { type: 'string' }, 'batch-size': { type: 'string' }, now: { type: 'string' }, 'pause-at': { type: 'string' }, 'start-at': { type: 'string' } },
 });
 
 function fail(message: string): never {
@@ -38,6 +39,9 @@ async function pauseIf(point: 'batch' | 'sent', count: number): Promise<void> {
 }
 
 await migrate(sequelize);
+const startAt = values['start-at'] === undefined ? 0 : Date.parse(values['start-at']);
+if (Number.isNaN(startAt)) fail('--start-at must be an ISO 8601 instant');
+await new Promise((resolve) => setTimeout(resolve, Math.max(0, startAt - Date.now())));
 const mailer = createMailer(config.SMTP_URL, config.MAIL_FROM);
 const pass = await dailyPass.run({
   db: sequelize, links: { appUrl: config.APP_URL }, now, ...(date ? { date } : {}), ...(batchSize ? { batchSize } : {}),
