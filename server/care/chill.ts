@@ -1,5 +1,6 @@
 import { dayOfYear, type IsoDate } from './dates';
-import { CareInputError, type DailyTemperature } from './degree-days';
+import type { DailyTemperature } from './degree-days';
+import { CareInputError } from './errors';
 
 // Winter chill from daily extremes (°C only: the chill thresholds are fixed in °C).
 //

@@ -1,5 +1,5 @@
 import * as SunCalc from 'suncalc';
-import { CareInputError } from './degree-days';
+import { CareInputError } from './errors';
 import type { IsoDate } from './dates';
 
 // Sun times come from suncalc 2 (upper limb at −0.833°, the same convention as USNO and NOAA).

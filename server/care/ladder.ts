@@ -1,5 +1,5 @@
 import { LADDER_DAYLIGHT_MARGIN_MINUTES } from './daylight';
-import { CareInputError } from './degree-days';
+import { CareInputError } from './errors';
 
 // Ladder arithmetic from safety.md §1. The UK "1 in 4" rule (HSE INDG455/INDG403) sets the foot
 // one unit out for every four units up; the US rule (OSHA 29 CFR 1926.1053(b)(5)(i)) takes a
