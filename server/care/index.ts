@@ -1,4 +1,5 @@
 // The care engine's public surface: callers import from here, never from the files themselves.
+export * from './errors';
 export * from './dates';
 export * from './degree-days';
 export * from './chill';
@@ -10,7 +11,3 @@ export * from './catalogue';
 export * from './projection';
 export * from './windows';
 export * from './stone-fruit-check';
-
-// cautions.ts and sources.ts both define the two source labels (same text); naming them here
-// settles which binding the star exports above hand out.
-export { COMMON_PRACTICE, FROM_MEMORY } from './sources';

@@ -1,130 +1,12 @@
-import { CareInputError } from './degree-days';
+import { HEAT_BANDS, type HeatBand } from './heat';
+import type { SourceId } from './safety-sources';
+import type { CautionSeverity, CautionTask, CautionTool, HeightBand } from './types';
 
-// Safety cautions picked from the reminder table in the team's safety reference (safety.md §7) by
-// task, tools, height band and site hazards. Codes are the reference's IDs; the text is our own
-// short wording for e-mails and phones. Nothing here says a job is safe: cautions point at known
-// hazards and, for high work or power lines, hand the job to a qualified arborist and the
-// electricity network operator.
+// The reminder table from the team's safety reference (safety.md §7), as data: each row says when
+// it applies, how serious it is, what it says and what it rests on. Codes are the reference's IDs;
+// the text is our own short wording for e-mails and phones.
 
-export type CautionTask = 'prune' | 'thin' | 'feed' | 'spray' | 'harvest' | 'tie-in' | 'mulch' | 'pick-leaves' | 'pinch';
-export type CautionTool =
-  | 'secateurs' | 'loppers' | 'pruning-saw' | 'pole-saw' | 'hedge-trimmer' | 'chainsaw'
-  | 'ladder' | 'sanitiser' | 'sprayer' | 'granular-feed' | 'liquid-feed' | 'knife';
-export type HeightBand = 'ground' | 'low' | 'mid' | 'high';
-export type CautionSeverity = 'info' | 'warn' | 'stop';
-
-export interface Caution {
-  code: string;
-  text: string;
-  source: string;
-  severity: CautionSeverity;
-}
-
-export interface CautionInput {
-  task: CautionTask;
-  tools?: CautionTool[];
-  /** Height of the grower's feet above the ground, in metres (the reference's bands are by feet). */
-  heightM?: number | null;
-  hazards?: string[];
-  /** 1–12, calendar month of the work. */
-  month?: number;
-  plantType?: string;
-  country?: 'UK' | 'US';
-  /** Forecast heat index in °F and UV index, when the caller has them. */
-  heatIndexF?: number;
-  uvIndex?: number;
-}
-
-// Height bands, safety.md §7 (a design choice there, label c): G feet on the ground, L feet up to
-// 1.0 m, M up to 3.0 m, H above 3.0 m (or a cut point above about 4.5 m), where work is deferred.
-export const LOW_BAND_MAX_M = 1.0;
-export const MID_BAND_MAX_M = 3.0;
-export const HIGH_CUT_POINT_M = 4.5;
-/** Reach above the feet for an average adult standing (safety.md §3.2, label c). */
-export const ARM_REACH_M = 2.0;
-
-export function heightBandFor(heightM: number): HeightBand {
-  if (!Number.isFinite(heightM) || heightM < 0) throw new CareInputError('Give the height in metres, zero or more.', 'heightM');
-  if (heightM === 0) return 'ground';
-  if (heightM <= LOW_BAND_MAX_M) return 'low';
-  return heightM <= MID_BAND_MAX_M ? 'mid' : 'high';
-}
-
-/** Band for the height of the cut or the fruit, for callers that know that rather than the feet. */
-export function heightBandForWork(workHeightM: number): HeightBand {
-  if (!Number.isFinite(workHeightM) || workHeightM < 0) throw new CareInputError('Give the height in metres, zero or more.', 'workHeightM');
-  if (workHeightM > HIGH_CUT_POINT_M) return 'high';
-  return heightBandFor(Math.max(0, workHeightM - ARM_REACH_M));
-}
-
-const GROUND_TOOLS: Record<CautionTask, CautionTool[]> = {
-  prune: ['secateurs', 'loppers', 'pruning-saw', 'sanitiser'],
-  thin: ['secateurs'],
-  feed: ['granular-feed', 'liquid-feed'],
-  spray: ['sprayer'],
-  harvest: [],
-  'tie-in': ['secateurs'],
-  mulch: [],
-  'pick-leaves': [],
-  pinch: [],
-};
-// Done from the ground whatever the plant's height: spraying from a ladder showers the sprayer.
-const GROUND_ONLY_TASKS: CautionTask[] = ['feed', 'spray', 'mulch'];
-
-/**
- * The usual tools for a task with the feet at `heightM`: a ladder once off the ground, and no
- * loppers above the low band, because they need both hands and a ladder needs one.
- */
-export function toolsFor(task: CautionTask, heightM?: number | null): CautionTool[] {
-  const band = heightM == null ? 'ground' : heightBandFor(heightM);
-  const tools = GROUND_TOOLS[task];
-  if (band === 'ground' || GROUND_ONLY_TASKS.includes(task)) return [...tools];
-  return ['ladder', ...tools.filter((tool) => band === 'low' || tool !== 'loppers')];
-}
-
-// The reference's source register (safety.md §0.3), written out as organisation and document.
-const SOURCES = {
-  S1: "HSE, Safe use of ladders and stepladders: a brief guide (INDG455, 2014)",
-  S2: 'HSE, A toolbox talk on leaning ladder and stepladder safety (INDG403)',
-  S3: 'The Work at Height Regulations 2005 (SI 2005/735)',
-  S4: "HSE, Safe use of ladders and stepladders: an employers' guide (INDG402, 2005)",
-  S5: 'US OSHA, 29 CFR 1926.1053 (ladders)',
-  S7: 'ANSI A14 portable ladder standards (duty ratings)',
-  S9: 'US OSHA, Protecting Workers from Tripod Orchard Ladder Injuries (QuickCard)',
-  S10: 'WSPS (Ontario), Orchard Ladder Safety',
-  S11: 'SAIF (Oregon), Orchard ladder safety',
-  S12: "A tripod-ladder maker's instructions, quoted in Hobby Farms (2022)",
-  S8: 'Washington State, WAC 296-307-05505 Use of orchard ladders (2020)',
-  S13: 'HSE, Chainsaws at work (INDG317 rev2, 2013)',
-  S14: 'HSE, Tree-climbing operations (AFAG401 rev1, 2009)',
-  S15: 'ANSI Z133-2017, Arboricultural Operations: Safety Requirements',
-  S16: "Chainsaw and pole-saw manufacturers' safety instructions",
-  S17: 'HSE, Avoiding danger from overhead power lines (GS6)',
-  S18: 'Energy Networks Association, Look Out, Look Up!',
-  S19: 'US OSHA, 29 CFR 1910.333(c)(3) and 1910.269',
-  S20: 'PG&E, Orchard worker safety program',
-  S21: 'Electrical Safety First, garden safety advice',
-  S22: 'University of Arizona Cooperative Extension, Sanitizing Pruning Tools (2018); University of Minnesota Extension, Back to Bleach (2015)',
-  S23: 'US EPA, Read the Label First! Protect Your Garden; Penn State Extension, Parts of the Pesticide Label (2017)',
-  S24: 'HSE Chemicals Regulation Division, Garden and home pesticides pages',
-  S25: 'USDA National Organic Program, 7 CFR 205.203(c)(1)',
-  S26: 'US FDA CFSAN letter on comfrey (2001)',
-  S27: 'HSE, Protecting lone workers (INDG73 rev4, 2020)',
-  S29: 'WHO, WMO, UNEP and ICNIRP, Global Solar UV Index: A Practical Guide (2002)',
-  S30: 'US OSHA, Heat: Water. Rest. Shade.',
-  S31: 'Redgrave & Solomon, Severe phytophotodermatitis from fig sap, BMJ Case Reports (2021)',
-  S32: 'Town and Country Planning Act 1990 s.211; Tree Preservation (England) Regulations 2012',
-  S33: 'Wildlife and Countryside Act 1981 s.1; RSPB guidance',
-  S34: 'Control of Vibration at Work Regulations 2005',
-  S35: 'Tree Care Industry Association staff arborist, quoted in Landscaping',
-  ESFI: 'Electrical Safety Foundation International, downed power line advice',
-} as const;
-
-type SourceId = keyof typeof SOURCES;
-export const COMMON_PRACTICE = 'common practice, no single source';
-export const FROM_MEMORY = 'from memory, unverified';
-
-interface Context {
+export interface Context {
   task: CautionTask;
   tools: Set<CautionTool>;
   band: HeightBand;
@@ -155,7 +37,7 @@ const lines = (c: Context): boolean => c.hazards.has('overhead-lines');
 const cuttingWork = (c: Context): boolean => c.task === 'prune' || c.task === 'thin' || has(c, ...CUTTING);
 const heatAtLeast = (c: Context, band: HeatBand): boolean => c.heat !== undefined && HEAT_BANDS.indexOf(c.heat) >= HEAT_BANDS.indexOf(band);
 
-const RULES: Rule[] = [
+export const RULES: Rule[] = [
   // Work beyond a grower: the deferral lines.
   { code: 'R-AR1', severity: 'stop', sources: [], when: (c) => c.band === 'high', text: 'Feet over 3 m up is beyond a ladder: use pole tools from the ground or book a qualified arborist. Near power lines, call the electricity network operator first.' },
   { code: 'R-PL4', severity: 'stop', sources: ['S20', 'S18'], when: lines, text: 'Branches touching or near a power line? Leave them: call the electricity network operator or a qualified line-clearance arborist.' },
@@ -249,75 +131,3 @@ const RULES: Rule[] = [
   { code: 'R-G5', severity: 'info', sources: ['S23'], when: () => true, text: 'Keep children and pets clear of ladders, blades, sprays and falling branches while you work.' },
   { code: 'R-G6', severity: 'info', sources: [], when: (c) => has(c, ...CUTTING), text: 'Keep your tetanus protection up to date and clean any cut or scratch promptly.' },
 ];
-
-/** OSHA heat-index bands (°F): lower < 91 ≤ moderate ≤ 103 < high ≤ 115 < very high. */
-export type HeatBand = 'lower' | 'moderate' | 'high' | 'very high';
-const HEAT_BANDS: HeatBand[] = ['lower', 'moderate', 'high', 'very high'];
-
-function bandOfHeatIndex(heatIndexF: number): HeatBand {
-  if (heatIndexF < 91) return 'lower';
-  if (heatIndexF <= 103) return 'moderate';
-  return heatIndexF <= 115 ? 'high' : 'very high';
-}
-
-/**
- * OSHA heat band. Full sun can add up to 15 °F, and OSHA says to take the next band's measures
- * when working in direct sun near a boundary: so full sun moves up at most one band, and only
- * when the extra 15 °F would cross into it.
- */
-export function heatBand(heatIndexF: number, isFullSun = false): HeatBand {
-  if (!Number.isFinite(heatIndexF)) throw new CareInputError('The heat index must be a number.', 'heatIndexF');
-  const shade = HEAT_BANDS.indexOf(bandOfHeatIndex(heatIndexF));
-  if (!isFullSun) return HEAT_BANDS[shade] as HeatBand;
-  const sun = HEAT_BANDS.indexOf(bandOfHeatIndex(heatIndexF + 15));
-  return HEAT_BANDS[Math.min(sun, shade + 1)] as HeatBand;
-}
-
-/** WHO Global Solar UV Index guide: protect from 3, take extra care from 8. */
-export function uvProtection(uvIndex: number): { isNeeded: boolean; isVeryHigh: boolean } {
-  return { isNeeded: uvIndex >= 3, isVeryHigh: uvIndex >= 8 };
-}
-
-/** OSHA: about a cup (240 ml) every 15–20 minutes in the heat. */
-export function waterCups(minutes: number): { min: number; max: number } {
-  return { min: Math.floor(minutes / 20), max: Math.ceil(minutes / 15) };
-}
-
-function describeSources(ids: SourceId[]): string {
-  return ids.length === 0 ? COMMON_PRACTICE : ids.map((id) => SOURCES[id]).join('; ');
-}
-
-const SEVERITY_ORDER: Record<CautionSeverity, number> = { stop: 0, warn: 1, info: 2 };
-
-function contextFor(input: CautionInput): Context {
-  const tools = new Set(input.tools ?? toolsFor(input.task, input.heightM));
-  // Without a height, a ladder in the kit means someone is off the ground: assume the middle band.
-  const band = input.heightM == null ? (tools.has('ladder') ? 'mid' : 'ground') : heightBandFor(input.heightM);
-  if (input.month !== undefined && !(Number.isInteger(input.month) && input.month >= 1 && input.month <= 12)) {
-    throw new CareInputError('The month runs from 1 to 12.', 'month');
-  }
-  return {
-    task: input.task,
-    tools,
-    band: band === 'ground' && tools.has('ladder') ? 'low' : band,
-    hazards: new Set(input.hazards ?? []),
-    month: input.month,
-    plantType: input.plantType,
-    country: input.country,
-    heat: input.heatIndexF === undefined ? undefined : heatBand(input.heatIndexF),
-    uvIndex: input.uvIndex,
-  };
-}
-
-/** The cautions for a piece of work, most serious first. */
-export function cautionsFor(input: CautionInput): Caution[] {
-  const context = contextFor(input);
-  return RULES.filter((rule) => rule.when(context))
-    .map((rule) => ({
-      code: rule.code,
-      text: typeof rule.text === 'string' ? rule.text : rule.text(context),
-      source: describeSources(rule.sources),
-      severity: rule.severity,
-    }))
-    .sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
-}
