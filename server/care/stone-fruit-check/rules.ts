@@ -1,96 +1,34 @@
-import { plantTypeCodes, plantTypeLabels, type PlantTypeCode } from '../schemas/catalogue';
-import { addDays, clampedDate, hemisphereOf, isIsoDate, monthOf, southernMonthWords, type IsoDate } from './dates';
-import { CareInputError } from './degree-days';
-import { catalogue } from './catalogue';
-import { cite, COMMON_PRACTICE, FROM_MEMORY, type SourceLabel } from './sources';
+import type { PlantTypeCode } from '../../schemas/catalogue';
+import { cite, COMMON_PRACTICE, FROM_MEMORY, type SourceLabel } from '../sources';
+import {
+  between, DORMANT, FORMATIVE_SPRING, LEAF_CURL_SHELTER, md, SUMMER, SWEET_CHERRY_UK, SWEET_CHERRY_US, US_LATE_DORMANT, US_PEACH_BLOOM, type Md,
+} from './calendar';
+import type { FiredRule, RuleEffect, StoneFruitProfile, StoneFruitSymptom, Verdict } from './types';
 
-// Is a cut on stone fruit safe on a given day? The rules are those of care-rules.md §3 (PR-1 …
-// PR-18 for the UK, US-1 … US-5 overriding them for the northern US). Silver leaf and bacterial
-// canker get in through fresh wounds; their spores and bacteria are about from September to May,
-// while summer wounds heal fast. Dates are judged by their northern-hemisphere equivalent, so a
-// southern site gets the same answer six months later.
+// The rules of care-rules.md §3 (PR-1 … PR-18 for the UK, US-1 … US-5 overriding them for the
+// northern US), as functions from a tree and a day to the rules that fire. The verdict is the most
+// serious effect among them.
 
-export type StoneFruitSymptom = 'silver-leaf' | 'canker' | 'dead-wood';
-export type StoneFruitProfile = 'uk' | 'us-north';
-export type Verdict = 'ok' | 'caution' | 'avoid';
-/** How one rule bears on the verdict; a note informs without changing it. */
-export type RuleEffect = Verdict | 'note';
-
-export interface StoneFruitCutInput {
-  type: PlantTypeCode;
-  date: IsoDate;
-  latitude: number;
-  ageYears?: number;
-  wet?: boolean;
-  symptoms?: readonly StoneFruitSymptom[];
-  profile?: StoneFruitProfile;
-}
-
-export interface FiredRule {
-  code: string;
-  effect: RuleEffect;
-  message: string;
-  source: string;
-}
-
-export interface StoneFruitCutCheck {
-  applies: boolean;
-  verdict: Verdict;
-  rules: FiredRule[];
-  /** The nearest run of days a cut is ok, starting today when today is ok. */
-  nextSafe?: { from: IsoDate; to: IsoDate };
-}
-
-/** Trees up to this many years after planting get formative pruning (care-rules.md PR-4: years 1–3). */
-export const FORMATIVE_MAX_AGE = 3;
-
-interface Context {
+export interface Context {
   type: PlantTypeCode;
   isYoung: boolean;
   profile: StoneFruitProfile;
   symptoms: readonly StoneFruitSymptom[];
 }
 
-type Md = number; // month * 100 + day, northern-hemisphere equivalent
-
-const md = (month: number, day: number): Md => month * 100 + day;
-const between = (x: Md, from: Md, to: Md): boolean => (from <= to ? x >= from && x <= to : x >= from || x <= to);
-
-// Leaf fall to bud burst: "November to early March" (S20); bud burst closes it around 10 March.
-const DORMANT = [md(11, 1), md(3, 10)] as const;
-const SUMMER = [md(6, 1), md(8, 31)] as const;
-const FORMATIVE_SPRING = [md(3, 20), md(4, 30)] as const;
-const SWEET_CHERRY_UK = [md(7, 21), md(8, 31)] as const;
-const SWEET_CHERRY_US = [md(7, 1), md(8, 31)] as const;
-// Calendar stand-ins for stages the US sources name (delayed dormant to early bloom; just before
-// bloom to two weeks after petal fall): the stages are published, these dates are our estimate.
-const US_LATE_DORMANT = [md(3, 15), md(4, 30)] as const;
-const US_PEACH_BLOOM = [md(4, 1), md(5, 15)] as const;
-const LEAF_CURL_SHELTER = [md(11, 1), md(5, 15)] as const;
-
 const isCherry = (t: PlantTypeCode): boolean => t === 'cherry-sweet' || t === 'cherry-sour';
 const isPeach = (t: PlantTypeCode): boolean => t === 'peach' || t === 'nectarine';
 const isPlum = (t: PlantTypeCode): boolean => t === 'plum' || t === 'gage' || t === 'damson';
 
-function fired(code: string, effect: RuleEffect, message: string, labels: readonly SourceLabel[]): FiredRule {
+export function fired(code: string, effect: RuleEffect, message: string, labels: readonly SourceLabel[]): FiredRule {
   return { code, effect, message, source: cite(labels) };
 }
 
 const SEVERITY: Record<RuleEffect, number> = { note: 0, ok: 0, caution: 1, avoid: 2 };
 
-function worst(rules: readonly FiredRule[]): Verdict {
+export function worst(rules: readonly FiredRule[]): Verdict {
   const top = Math.max(0, ...rules.map((r) => SEVERITY[r.effect]));
   return top === 2 ? 'avoid' : top === 1 ? 'caution' : 'ok';
-}
-
-/** The same day of the year half a year on: what a southern date corresponds to in the north. */
-function northernEquivalent(date: IsoDate, latitude: number): Md {
-  const month = monthOf(date);
-  const day = Number(date.slice(8, 10));
-  if (hemisphereOf(latitude) === 'north') return md(month, day);
-  const shifted = ((month + 5) % 12) + 1;
-  // 31 August has no twin in February; a non-leap year keeps the answer the same every year.
-  return md(shifted, Number(clampedDate(2001, shifted, day).slice(8, 10)));
 }
 
 function dormantRules(ctx: Context, x: Md): FiredRule[] {
@@ -197,11 +135,11 @@ function symptomRules(ctx: Context, x: Md): FiredRule[] {
   return rules;
 }
 
-function dayRules(ctx: Context, x: Md): FiredRule[] {
+export function dayRules(ctx: Context, x: Md): FiredRule[] {
   return [...seasonalRules(ctx, x), ...symptomRules(ctx, x)];
 }
 
-function notes(ctx: Context, x: Md, verdict: Verdict): FiredRule[] {
+export function notes(ctx: Context, x: Md, verdict: Verdict): FiredRule[] {
   const rules: FiredRule[] = [];
   if (isPeach(ctx.type) && between(x, ...LEAF_CURL_SHELTER)) {
     rules.push(fired('PR-18', 'note', 'On a wall or fence, keep a polythene rain shelter (open at the ends) over the tree from leaf fall until mid-May against peach leaf curl.', ['S9']));
@@ -213,51 +151,6 @@ function notes(ctx: Context, x: Md, verdict: Verdict): FiredRule[] {
   return rules;
 }
 
-function wetRule(profile: StoneFruitProfile): FiredRule {
+export function wetRule(profile: StoneFruitProfile): FiredRule {
   return fired('PR-11', 'caution', 'Prune on a dry day: wet wounds let canker and silver leaf in.', profile === 'us-north' ? ['S7', 'S57', 'S58'] : ['S7']);
-}
-
-function nearestSafe(ctx: Context, from: IsoDate, latitude: number): { from: IsoDate; to: IsoDate } | undefined {
-  const isOk = (date: IsoDate) => worst(dayRules(ctx, northernEquivalent(date, latitude))) === 'ok';
-  let i = 0;
-  while (i <= 366 && !isOk(addDays(from, i))) i++;
-  if (i > 366) return undefined;
-  let j = i;
-  while (j - i <= 366 && isOk(addDays(from, j + 1))) j++;
-  return { from: addDays(from, i), to: addDays(from, j) };
-}
-
-function checkInput(input: StoneFruitCutInput): void {
-  if (!(plantTypeCodes as readonly string[]).includes(input.type)) throw new CareInputError('Choose a plant type from the catalogue.', 'type');
-  if (!isIsoDate(input.date)) throw new CareInputError('Use the form YYYY-MM-DD for the date.', 'date');
-  if (!Number.isFinite(input.latitude) || Math.abs(input.latitude) > 90) throw new CareInputError('Latitude runs from -90 to 90.', 'latitude');
-  if (input.ageYears !== undefined && !(Number.isFinite(input.ageYears) && input.ageYears >= 0)) throw new CareInputError('Age must be a number of years, 0 or more.', 'ageYears');
-}
-
-export function isStoneFruit(type: PlantTypeCode): boolean {
-  return catalogue[type].group === 'stone';
-}
-
-export function checkStoneFruitCut(input: StoneFruitCutInput): StoneFruitCutCheck {
-  checkInput(input);
-  if (!isStoneFruit(input.type)) {
-    const message = `${plantTypeLabels[input.type]} is not stone fruit, so the stone-fruit check does not apply: prune it in its own window.`;
-    return { applies: false, verdict: 'ok', rules: [fired('NOT-STONE', 'note', message, ['S3', 'S18', 'S26'])] };
-  }
-  const ctx: Context = {
-    type: input.type,
-    isYoung: input.ageYears !== undefined && input.ageYears <= FORMATIVE_MAX_AGE,
-    profile: input.profile ?? 'uk',
-    symptoms: input.symptoms ?? [],
-  };
-  const x = northernEquivalent(input.date, input.latitude);
-  const rules = dayRules(ctx, x);
-  if (input.wet) rules.push(wetRule(ctx.profile));
-  const verdict = worst(rules);
-  rules.push(...notes(ctx, x, verdict));
-  // A wet day is judged on the weather; the next safe window then starts tomorrow at the earliest.
-  const nextSafe = nearestSafe(ctx, input.wet ? addDays(input.date, 1) : input.date, input.latitude);
-  // The messages name northern months; a southern grower reads them six months on.
-  const worded = hemisphereOf(input.latitude) === 'south' ? rules.map((r) => ({ ...r, message: southernMonthWords(r.message) })) : rules;
-  return nextSafe ? { applies: true, verdict, rules: worded, nextSafe } : { applies: true, verdict, rules: worded };
 }
