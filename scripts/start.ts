@@ -1,6 +1,6 @@
 // `npm start` (and `npm run dev`): brings up the whole product on loopback — PostgreSQL from
 // Debian's packages in .data/, maildev, the web server and the worker — and stops all of it on
-// Ctrl-C. DATABASE_URL and SMTP_URL point at services of your own instead; PORT moves the web server.
+// Ctrl-C. DATABASE_URL, SMTP_URL and STATION_URL point at services of your own instead; PORT moves the web server.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
@@ -15,6 +15,7 @@ import { repoRoot, waitForHealth } from './lib/processes';
 const isDev = process.argv.includes('--dev');
 const dataDir = path.join(repoRoot, '.data');
 const port = Number(process.env.PORT ?? 3000);
+const stationFakePort = 8089;
 const started: { name: string; child: ChildProcess }[] = [];
 let cluster: Cluster | null = null;
 let stopping = false;
@@ -105,6 +106,13 @@ async function main(): Promise<void> {
   if (!process.env.SMTP_URL) {
     launch('maildev', process.execPath, maildevArgs(1025, 1080), env);
     env.SMTP_URL = 'smtp://127.0.0.1:1025';
+  }
+
+  // The weather-station fake stands in for a real station service unless STATION_URL names one.
+  if (!process.env.STATION_URL) {
+    if (await isPortInUse(stationFakePort)) say(`Port ${stationFakePort} is taken; assuming a station service is already listening there`);
+    else launch('station fake', process.execPath, ['--import', 'tsx', 'scripts/station-fake.ts'], { ...env, STATION_FAKE_PORT: String(stationFakePort) });
+    env.STATION_URL = `http://127.0.0.1:${stationFakePort}`;
   }
 
   const seed = spawnSync(process.execPath, ['--import', 'tsx', 'seeds/run.ts'], { cwd: repoRoot, env, stdio: 'inherit' });

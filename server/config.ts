@@ -16,6 +16,9 @@ const envSchema = z.object({
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(10),
   CLIENT_DIR: z.string().default('dist/client'),
+  // The weather-station service sites pull daily readings from; `npm start` runs a local fake here.
+  STATION_URL: z.string().url().default('http://127.0.0.1:8089'),
+  STATION_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(8000),
 });
 
 export type Config = z.infer<typeof envSchema> & { APP_URL: string; SESSION_SECRET: string };

@@ -7,13 +7,15 @@ import { PasswordResetToken } from './password-reset-token.model';
 import { Plant } from './plant.model';
 import { ReminderPreference } from './reminder-preference.model';
 import { Site } from './site.model';
+import { SiteNormal } from './site-normal.model';
+import { SiteReading } from './site-reading.model';
 import { User } from './user.model';
 
-export { CareWindow, Group, Membership, OutboxMessage, PasswordResetToken, Plant, ReminderPreference, Site, User };
+export { CareWindow, Group, Membership, OutboxMessage, PasswordResetToken, Plant, ReminderPreference, Site, SiteNormal, SiteReading, User };
 
 // Define every model first, then associate, so no association refers to a model not yet initialised.
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage, CareWindow, ReminderPreference]) model.initModel(sequelize);
+  for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage, CareWindow, SiteReading, SiteNormal, ReminderPreference]) model.initModel(sequelize);
 
   Group.hasMany(Membership, { foreignKey: 'groupId', as: 'memberships' });
   Membership.belongsTo(Group, { foreignKey: 'groupId', as: 'group' });

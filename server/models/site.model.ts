@@ -12,6 +12,8 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare hazards: SiteHazard[];
   declare notes: string;
   declare archivedAt: Date | null;
+  /** The weather station whose daily readings the site pulls, if any. */
+  declare stationId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -28,6 +30,7 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
         hazards: { type: DataTypes.ARRAY(DataTypes.STRING(30)), allowNull: false, defaultValue: [] },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
+        stationId: { type: DataTypes.STRING(64), allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -4,11 +4,16 @@ import { requireRole } from '../middleware/require-role';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { siteCreateSchema, siteListQuerySchema, siteUpdateSchema } from '../schemas/site';
 import * as sites from '../services/site.service';
+import { readingsRouter } from './readings.routes';
+import { siteWeatherRouter } from './site-weather.routes';
 
 export const sitesRouter = Router({ mergeParams: true });
 
 const siteParams = z.object({ siteId: z.uuid({ message: 'Not a valid site id' }) }).loose();
 const siteIdOf = (req: Request) => parseParams(req, siteParams).siteId;
+
+sitesRouter.use('/:siteId/readings', readingsRouter);
+sitesRouter.use('/:siteId/weather', siteWeatherRouter);
 
 sitesRouter.get('/', requireRole('viewer'), async (req, res) => {
   res.json(await sites.listSites(req.membership!.groupId, parseQuery(req, siteListQuerySchema).includeArchived));
