@@ -1,3 +1,5 @@
+import { MONTH_NAMES } from './month-names';
+
 // Calendar dates travel as `YYYY-MM-DD` strings. Arithmetic runs in UTC so that a date never
 // slips a day with the machine's time zone or a daylight-saving change.
 
@@ -77,8 +79,6 @@ export function clampedDate(year: number, month: number, day: number): IsoDate {
   const lastDay = new Date(Date.UTC(year, month, 0)).getUTCDate();
   return makeDate(year, month, Math.min(day, lastDay));
 }
-
-const MONTH_NAMES = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 
 /**
  * Advice written for the north, reworded for a southern site: each month name moves six months on.

@@ -20,6 +20,9 @@ const isCherry = (t: PlantTypeCode): boolean => t === 'cherry-sweet' || t === 'c
 const isPeach = (t: PlantTypeCode): boolean => t === 'peach' || t === 'nectarine';
 const isPlum = (t: PlantTypeCode): boolean => t === 'plum' || t === 'gage' || t === 'damson';
 
+// A tree with silver leaf or canker needs remedial cuts, which follow their own timing.
+const isRemedial = (ctx: Context): boolean => ctx.symptoms.includes('silver-leaf') || ctx.symptoms.includes('canker');
+
 export function fired(code: string, effect: RuleEffect, message: string, labels: readonly SourceLabel[]): FiredRule {
   return { code, effect, message, source: cite(labels) };
 }
@@ -37,10 +40,15 @@ function dormantRules(ctx: Context, x: Md): FiredRule[] {
     fired('PR-2', 'caution', 'Silver leaf spores are about from September to May.', ['S1']),
   ];
   if (ctx.profile === 'us-north' && isPeach(ctx.type) && x < md(4, 1)) {
-    rules.push(fired('US-1', 'avoid', 'Penn State advises no peach pruning from January to March or before the buds swell (Cytospora canker).', ['S54']));
+    rules.push(usPeachWinter());
   }
   if (x >= md(9, 1)) rules.push(pr10());
   return rules;
+}
+
+// Fired both in the dormant season and in early spring, so written once.
+function usPeachWinter(): FiredRule {
+  return fired('US-1', 'avoid', 'Penn State advises no peach pruning from January to March or before the buds swell (Cytospora canker).', ['S54']);
 }
 
 function pr10(): FiredRule {
@@ -51,7 +59,7 @@ function usOverride(ctx: Context, x: Md): FiredRule | null {
   if (ctx.profile !== 'us-north') return null;
   if (isPeach(ctx.type)) {
     if (between(x, ...US_PEACH_BLOOM)) return fired('US-1', 'ok', 'Peaches are best pruned from just before bloom to two weeks after petal fall (about April to mid-May in the northern US).', ['S54', FROM_MEMORY]);
-    if (x < md(4, 1)) return fired('US-1', 'avoid', 'Penn State advises no peach pruning from January to March or before the buds swell (Cytospora canker).', ['S54']);
+    if (x < md(4, 1)) return usPeachWinter();
     return null;
   }
   if (ctx.type !== 'cherry-sweet' && between(x, ...US_LATE_DORMANT)) {
@@ -64,8 +72,7 @@ function springAutumnRules(ctx: Context, x: Md): FiredRule[] {
   const override = usOverride(ctx, x);
   if (override) return [override];
   const rules: FiredRule[] = [];
-  const isRemedial = ctx.symptoms.includes('silver-leaf') || ctx.symptoms.includes('canker');
-  if (ctx.isYoung && !isRemedial && between(x, ...FORMATIVE_SPRING)) {
+  if (ctx.isYoung && !isRemedial(ctx) && between(x, ...FORMATIVE_SPRING)) {
     rules.push(fired('PR-4', 'ok', 'Formative pruning of a young tree is done now, at or just after bud burst, rather than in winter.', formativeSources(ctx.type)));
     return rules;
   }
@@ -87,8 +94,7 @@ function formativeSources(type: PlantTypeCode): SourceLabel[] {
 }
 
 function summerRules(ctx: Context, x: Md): FiredRule[] {
-  const isRemedial = ctx.symptoms.includes('silver-leaf') || ctx.symptoms.includes('canker');
-  if (ctx.type === 'cherry-sweet' && !ctx.isYoung && !isRemedial) return [sweetCherrySummer(ctx, x)];
+  if (ctx.type === 'cherry-sweet' && !ctx.isYoung && !isRemedial(ctx)) return [sweetCherrySummer(ctx, x)];
   const rules = [fired('PR-3', 'ok', 'Summer is the time to prune stone fruit: fewer silver leaf spores, and cuts heal fast.', ['S1'])];
   if (ctx.isYoung) return rules;
   if (ctx.type === 'cherry-sour') rules.push(fired('PR-6', 'note', 'The main pruning of acid cherries is in late summer, straight after picking.', ['S3']));

@@ -1,13 +1,12 @@
 import type { MonthDay } from '../catalogue';
 import { clampedDate, type Hemisphere, type IsoDate } from '../dates';
+import { MONTH_NAMES } from '../month-names';
 
 // Calendar bounds placed in a season and hemisphere, and dates written the way growers read them.
 
-const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
-
 /** "24 July": dates in reasons are read by growers, not parsed. */
 export function formatDay(date: IsoDate): string {
-  return `${Number(date.slice(8, 10))} ${MONTHS[Number(date.slice(5, 7)) - 1] ?? ''}`;
+  return `${Number(date.slice(8, 10))} ${MONTH_NAMES[Number(date.slice(5, 7)) - 1] ?? ''}`;
 }
 
 const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
