@@ -13,9 +13,13 @@ import { apiNotFound } from './middleware/not-found';
 import { requestId } from './middleware/request-id';
 import { passport, sessionMiddleware } from './middleware/session';
 import { authRouter } from './routes/auth.routes';
+import { calendarRouter } from './routes/calendar.routes';
 import { groupsRouter } from './routes/groups.routes';
 import { healthRouter } from './routes/health.routes';
+import { adminRouter } from './routes/operations.routes';
+import { remindersRouter } from './routes/reminders.routes';
 import { toolsRouter } from './routes/tools.routes';
+import { unsubscribeRouter } from './routes/unsubscribe.routes';
 import { toolsLimit } from './middleware/tools-limit';
 
 export interface AppOptions {
@@ -59,13 +63,17 @@ export function createApp(options: AppOptions = {}): Express {
 
   app.use('/api/health', healthRouter);
   app.use('/api/tools', toolsLimit, toolsRouter);
+  app.use('/api/calendar', calendarRouter);
 
   app.use('/api', sessionMiddleware(options.sessionPool ?? new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 })));
   app.use('/api', passport.session());
   app.use('/api', csrfProtection);
   app.use('/api/auth', authRouter);
   app.use('/api/groups', groupsRouter);
+  app.use('/api/reminders', remindersRouter);
+  app.use('/api/admin', adminRouter);
   app.use('/api', apiNotFound);
+  app.use('/unsubscribe', unsubscribeRouter);
 
   if (options.serveClient ?? true) serveClient(app);
   app.use(errorHandler);

@@ -4,6 +4,7 @@ import { requireRole } from '../middleware/require-role';
 import { parseBody } from '../middleware/validate';
 import { groupCreateSchema, groupUpdateSchema } from '../schemas/group';
 import * as groups from '../services/group.service';
+import { groupOperationsRouter } from './operations.routes';
 import { plantsRouter } from './plants.routes';
 import { sitesRouter } from './sites.routes';
 
@@ -32,3 +33,4 @@ groupsRouter.get('/:groupId/members', requireRole('viewer'), async (req, res) =>
 
 groupsRouter.use('/:groupId/sites', sitesRouter);
 groupsRouter.use('/:groupId/plants', plantsRouter);
+groupsRouter.use('/:groupId/operations', groupOperationsRouter);
