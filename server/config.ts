@@ -19,6 +19,8 @@ const envSchema = z.object({
   // The weather-station service sites pull daily readings from; `npm start` runs a local fake here.
   STATION_URL: z.string().url().default('http://127.0.0.1:8089'),
   STATION_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(8000),
+  // Photos live here, outside the web root (relative paths from the repository); the tests use a temp folder.
+  UPLOAD_DIR: z.string().min(1).default('.data/uploads'),
 });
 
 export type Config = z.infer<typeof envSchema> & { APP_URL: string; SESSION_SECRET: string };

@@ -1,9 +1,13 @@
 import type { Sequelize } from 'sequelize';
 import { CareWindow } from './care-window.model';
 import { Group } from './group.model';
+import { LogEntry } from './log-entry.model';
+import { LogEntryPlant } from './log-entry-plant.model';
+import { LogEntryWindow } from './log-entry-window.model';
 import { Membership } from './membership.model';
 import { OutboxMessage } from './outbox-message.model';
 import { PasswordResetToken } from './password-reset-token.model';
+import { Photo } from './photo.model';
 import { Plant } from './plant.model';
 import { ReminderPreference } from './reminder-preference.model';
 import { Site } from './site.model';
@@ -13,9 +17,12 @@ import { User } from './user.model';
 
 export { CareWindow, Group, Membership, OutboxMessage, PasswordResetToken, Plant, ReminderPreference, Site, SiteNormal, SiteReading, User };
 
+export { LogEntry, LogEntryPlant, LogEntryWindow, Photo };
+
 // Define every model first, then associate, so no association refers to a model not yet initialised.
 export function initModels(sequelize: Sequelize): void {
   for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage, CareWindow, SiteReading, SiteNormal, ReminderPreference]) model.initModel(sequelize);
+  for (const model of [LogEntry, LogEntryPlant, LogEntryWindow, Photo]) model.initModel(sequelize);
 
   Group.hasMany(Membership, { foreignKey: 'groupId', as: 'memberships' });
   Membership.belongsTo(Group, { foreignKey: 'groupId', as: 'group' });

@@ -4,7 +4,9 @@ import { requireRole } from '../middleware/require-role';
 import { parseBody } from '../middleware/validate';
 import { groupCreateSchema, groupUpdateSchema } from '../schemas/group';
 import * as groups from '../services/group.service';
+import { logRouter } from './log.routes';
 import { groupOperationsRouter } from './operations.routes';
+import { photosRouter, plantPhotosRouter } from './photos.routes';
 import { plantsRouter } from './plants.routes';
 import { sitesRouter } from './sites.routes';
 
@@ -32,5 +34,8 @@ groupsRouter.get('/:groupId/members', requireRole('viewer'), async (req, res) =>
 });
 
 groupsRouter.use('/:groupId/sites', sitesRouter);
+groupsRouter.use('/:groupId/plants/:plantId/photos', plantPhotosRouter);
 groupsRouter.use('/:groupId/plants', plantsRouter);
+groupsRouter.use('/:groupId/log', logRouter);
+groupsRouter.use('/:groupId/photos', photosRouter);
 groupsRouter.use('/:groupId/operations', groupOperationsRouter);

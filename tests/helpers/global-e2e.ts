@@ -2,6 +2,7 @@
 // demo scenario, maildev, the built client served by the real web server, and the worker — on free
 // loopback ports. Everything is stopped and removed afterwards.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import pg from 'pg';
 import { buildClientIfStale } from '../../scripts/lib/client-build';
@@ -46,6 +47,7 @@ export default async function setup(project: TestProject) {
     SESSION_SECRET: 'end-to-end-tests-session-secret',
     BCRYPT_COST: '4',
     LOG_LEVEL: 'warn',
+    UPLOAD_DIR: path.join(test.root, 'uploads'),
   };
   const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'seeds/run.ts'], { cwd: repoRoot, env, encoding: 'utf8' });
   if (seeded.status !== 0) throw new Error(`Seeding failed:\n${seeded.stderr}`);

@@ -1,0 +1,12 @@
+// Runs in a worker thread: decoding a 12-megapixel JPEG in pure JavaScript takes seconds, and the
+// web server's one thread must keep answering meanwhile. Plain JavaScript so that it loads the same
+// under tsx, vitest and a built server.
+import { parentPort, workerData } from 'node:worker_threads';
+import { Jimp } from 'jimp';
+
+const { bytes, edge, quality } = workerData;
+const image = await Jimp.read(Buffer.from(bytes));
+// Jimp turns the picture upright from its EXIF orientation as it reads it; a thumbnail keeps no EXIF.
+if (image.width > edge || image.height > edge) image.scaleToFit({ w: edge, h: edge });
+const out = await image.getBuffer('image/jpeg', { quality });
+parentPort.postMessage(out, [out.buffer]);
