@@ -44,7 +44,7 @@ export function inventedDay(key: string, date: IsoDate, climate: InventedClimate
   const shiftDays = hemisphereOf(climate.latitude) === 'south' ? 182 : 0;
   const angle = (2 * Math.PI * (dayOfYear(date) + shiftDays - 112)) / 365;
   const year = Number(date.slice(0, 4));
-  const yearly = (unit(`${key}|year|${year}`) - 0.5) * 1.2;
+  const yearly = (unit(`${key}|year|${year}`) - 0.5) * 2.4;
   const mean = 10.3 + 6.9 * Math.sin(angle) + spell(key, date) + yearly + (climate.shift ?? 0) + (unit(`${key}|mean|${date}`) - 0.5) * 2;
   const half = 3.4 + 1.6 * Math.sin(angle + 0.5) + unit(`${key}|range|${date}`) * 1.6;
   const isWet = unit(`${key}|wet|${date}`) < 0.45;

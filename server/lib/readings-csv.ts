@@ -107,7 +107,8 @@ export function detectUnit(table: CsvTable, mapping: { tmin: number | null; tmax
   if (headers.some(saysFahrenheit)) return { unit: 'F', note: 'The column names say °F.' };
   if (headers.some(saysCelsius)) return { unit: 'C', note: 'The column names say °C.' };
   const highs = mapping.tmax === null ? [] : table.rows.map((r) => parseNumber(r[mapping.tmax!] ?? '', table.delimiter)).filter((v): v is number => v !== null);
-  // Daily highs above 45 °C are almost unknown where fruit is grown; in °F they are an ordinary summer.
+  // Daily highs above 45 °C are almost unknown where fruit is grown, while in °F they are an ordinary
+  // summer day: our own rule of thumb, no single source. The preview says so and the person can change it.
   if (highs.some((v) => v > 45)) return { unit: 'F', note: 'No unit in the column names; maximums above 45 suggest °F.' };
   return { unit: 'C', note: 'No unit in the column names; the values look like °C.' };
 }
@@ -203,6 +204,8 @@ function readRain(cell: string | undefined, factor: number, delimiter: string, e
   return Math.round(value * factor * 10) / 10;
 }
 
+const asWritten = (cell: string | undefined, table: CsvTable) => parseNumber(cell ?? '', table.delimiter);
+
 /** Every row checked on its own, then dates seen twice; each row keeps its line number. */
 export function readRows(table: CsvTable, o: ReadOptions): ReadRow[] {
   const seen = new Map<string, number>();
@@ -216,7 +219,8 @@ export function readRows(table: CsvTable, o: ReadOptions): ReadRow[] {
     else if (date > o.today) errors.push(`${date} is after today`);
     const tminC = readTemperature(cells[o.mapping.tmin], 'minimum', o, table.delimiter, errors);
     const tmaxC = readTemperature(cells[o.mapping.tmax], 'maximum', o, table.delimiter, errors);
-    if (tminC !== null && tmaxC !== null && tminC > tmaxC) errors.push(`The minimum (${tminC} °C) is above the maximum (${tmaxC} °C)`);
+    // Said in the file's own unit, so the grower recognises the numbers in their spreadsheet.
+    if (tminC !== null && tmaxC !== null && tminC > tmaxC) errors.push(`The minimum (${asWritten(cells[o.mapping.tmin], table)} °${o.unit}) is above the maximum (${asWritten(cells[o.mapping.tmax], table)} °${o.unit})`);
     const rainMm = o.mapping.rain === null ? null : readRain(cells[o.mapping.rain], rainFactor, table.delimiter, errors);
     if (date) {
       const earlier = seen.get(date);

@@ -68,7 +68,7 @@ export const dateRangeSchema = z.object({ from: z.string(), to: z.string() });
 
 export const siteWeatherSchema = z.object({
   season: z.number(),
-  /** Today at the site: what "missing" is counted up to. */
+  /** Today at the site; days up to yesterday without a reading count as missing. */
   today: z.string(),
   start: z.string(),
   end: z.string(),
@@ -84,7 +84,7 @@ export const siteWeatherSchema = z.object({
     normal: z.array(z.number()),
     /** Per day: 1 read, 0 filled from normals. */
     isReading: z.array(z.number()),
-    /** The last day that counts as measured weather: today, or the season's end for a past season. */
+    /** The last day that counts as measured weather: yesterday at the site, or the season's end for a past season. */
     through: z.string(),
   }),
   missing: z.object({ count: z.number(), ranges: z.array(dateRangeSchema) }),

@@ -42,9 +42,10 @@ export function chillWinter(on: string, latitude: number): { from: string; to: s
   return { from, to: addDays(makeDate(year + (startMonth === 10 ? 1 : 0), startMonth === 10 ? 3 : 9, 1), -1) };
 }
 
-async function winterChill(site: Site, on: string, normals: MonthlyNormal[]): Promise<SiteWeather['chill']> {
+/** The winter begun by `on`, counted to its end or to `lastDay` (yesterday), whichever is earlier. */
+async function winterChill(site: Site, on: string, lastDay: string, normals: MonthlyNormal[]): Promise<SiteWeather['chill']> {
   const { from, to } = chillWinter(on, site.latitude);
-  const through = minDate(on, to);
+  const through = minDate(lastDay, to);
   const empty = { from, to, through: null, chillHours: 0, utahUnits: 0, dailyHours: [], dailyUtah: [], missingDays: 0 };
   if (through < from) return empty;
   const rows = await SiteReading.findAll({ where: { siteId: site.id, date: { [Op.between]: [from, through] } }, attributes: ['date', 'tminC', 'tmaxC'], raw: true });
@@ -81,7 +82,8 @@ export async function siteWeather(groupId: string, siteId: string, query: Weathe
   const actual = siteSeason(site, season, climate.readings, siteNormals);
   const usual = siteSeason(site, season, [], siteNormals);
   const temps = actual.temperatures;
-  const through = minDate(today, temps.end);
+  // Today's minimum and maximum are not known until the day is over: yesterday is the last day a reading can be missing.
+  const through = minDate(addDays(today, -1), temps.end);
   const dates = dateRange(temps.start, temps.end);
   return {
     season, today, start: temps.start, end: temps.end, base: query.base, latestReading, stationId: site.stationId ?? null, normals,
@@ -93,6 +95,6 @@ export async function siteWeather(groupId: string, siteId: string, query: Weathe
     },
     missing: missingRanges(dates, temps.isReading, through),
     readingDays: temps.readingCount,
-    chill: await winterChill(site, minDate(today, temps.end), engineNormals),
+    chill: await winterChill(site, through, addDays(today, -1), engineNormals),
   };
 }
