@@ -74,7 +74,7 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
-function toApiError(status: number, payload: unknown): ApiError {
+export function toApiError(status: number, payload: unknown): ApiError {
   const envelope = (payload as { error?: Partial<Record<string, unknown>> } | undefined)?.error;
   if (envelope && typeof envelope.code === 'string' && typeof envelope.message === 'string') {
     const issues = Array.isArray(envelope.issues) ? (envelope.issues as ErrorIssue[]) : [];
@@ -95,6 +95,10 @@ async function fetchCsrfToken(): Promise<string> {
 }
 
 const isCsrfFailure = (error: ApiError) => error.status === 403 && /csrf/i.test(error.code);
+
+/** For upload.ts, which sends files through XMLHttpRequest to report progress: the same token and 401 handling. */
+export const writeToken = (fresh = false): Promise<string> => (!fresh && csrfToken ? Promise.resolve(csrfToken) : fetchCsrfToken());
+export const reportUnauthenticated = (): void => onUnauthenticated?.();
 
 export async function request<T>(method: Method, path: string, options: RequestOptions = {}): Promise<T> {
   const url = buildUrl(path, options.query);
