@@ -40,23 +40,47 @@ const THUMB_EDGE = 480;
 const THUMB_QUALITY = 78;
 const THUMB_TIMEOUT_MS = 60_000;
 
+type Pending = { resolve: (b: Buffer) => void; reject: (e: Error) => void; timer: NodeJS.Timeout };
+let worker: Worker | null = null;
+let nextId = 0;
+const pending = new Map<number, Pending>();
+
+// Starting a worker and loading jimp costs a second or two, so one worker lives on between photos;
+// unref() lets the process exit without waiting for it. If it dies, every waiting photo fails and
+// the next one starts a fresh worker.
+function thumbnailWorker(): Worker {
+  if (worker) return worker;
+  const w = new Worker(new URL('./thumbnail-worker.mjs', import.meta.url));
+  w.unref();
+  w.on('message', ({ id, out, error }: { id: number; out?: Uint8Array; error?: string }) => {
+    const job = pending.get(id);
+    if (!job) return;
+    pending.delete(id);
+    clearTimeout(job.timer);
+    if (out) job.resolve(Buffer.from(out));
+    else job.reject(new Error(error ?? 'Thumbnail failed'));
+  });
+  const fail = (err: Error) => {
+    if (worker === w) worker = null;
+    for (const [id, job] of pending) {
+      clearTimeout(job.timer);
+      job.reject(err);
+      pending.delete(id);
+    }
+  };
+  w.on('error', fail);
+  w.on('exit', (code) => fail(new Error(`Thumbnail worker stopped with code ${code}`)));
+  worker = w;
+  return w;
+}
+
 /** A JPEG at most 480 px on its longer side, made by jimp (pure JavaScript) in a worker thread. Rejects an undecodable image. */
 export function makeThumbnail(bytes: Buffer): Promise<Buffer> {
   return new Promise((resolve, reject) => {
-    const worker = new Worker(new URL('./thumbnail-worker.mjs', import.meta.url), { workerData: { bytes, edge: THUMB_EDGE, quality: THUMB_QUALITY } });
-    const timer = setTimeout(() => void worker.terminate().then(() => reject(new Error('Thumbnail timed out'))), THUMB_TIMEOUT_MS);
-    worker.once('message', (out: Uint8Array) => {
-      clearTimeout(timer);
-      resolve(Buffer.from(out));
-      void worker.terminate();
-    });
-    worker.once('error', (err) => {
-      clearTimeout(timer);
-      reject(err);
-    });
-    worker.once('exit', (code) => {
-      clearTimeout(timer);
-      if (code !== 0) reject(new Error(`Thumbnail worker stopped with code ${code}`));
-    });
+    const id = nextId++;
+    // A picture that takes a minute is not one a phone took; stop the worker rather than wait on.
+    const timer = setTimeout(() => void worker?.terminate(), THUMB_TIMEOUT_MS);
+    pending.set(id, { resolve, reject, timer });
+    thumbnailWorker().postMessage({ id, bytes, edge: THUMB_EDGE, quality: THUMB_QUALITY });
   });
 }

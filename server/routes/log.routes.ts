@@ -5,6 +5,7 @@ import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { logEntryCreateSchema, logEntryParamsSchema, logGuardQuerySchema, logListQuerySchema } from '../schemas/log';
 import { seasonReportQuerySchema } from '../schemas/season-report';
 import { checkLogCut } from '../services/log-plants.service';
+import { exportLogCsv } from '../services/log-export.service';
 import * as log from '../services/log.service';
 import { addPhoto } from '../services/photo.service';
 import { seasonReport } from '../services/season-report.service';
@@ -18,6 +19,14 @@ const me = (req: Request) => ({ groupId: req.membership!.groupId, role: req.memb
 
 logRouter.get('/', requireRole('viewer'), async (req, res) => {
   res.json(await log.listLog(me(req).groupId, parseQuery(req, logListQuerySchema)));
+});
+
+logRouter.get('/export.csv', requireRole('viewer'), async (req, res) => {
+  const csv = await exportLogCsv(me(req).groupId, parseQuery(req, logListQuerySchema));
+  res.setHeader('Content-Disposition', `attachment; filename="spurwood-log-${new Date().toISOString().slice(0, 10)}.csv"`);
+  res.setHeader('Cache-Control', 'private, no-store');
+  // The byte-order mark tells spreadsheet programs the file is UTF-8 (en dashes, degree signs).
+  res.type('text/csv; charset=utf-8').send(`\uFEFF${csv}`);
 });
 
 logRouter.get('/stone-fruit-check', requireRole('viewer'), async (req, res) => {

@@ -22,6 +22,8 @@ export interface LogPlant {
 /** "Victoria plum"; just "Blackcurrant" when no cultivar was recorded. */
 export function plantLabel(cultivar: string, typeCode: PlantTypeCode): string {
   const type = plantTypeLabels[typeCode];
+  // "Cambridge Gage", not "Cambridge Gage gage".
+  if (cultivar && cultivar.toLowerCase().includes(type.toLowerCase())) return cultivar;
   return cultivar ? `${cultivar} ${type.toLowerCase()}` : type;
 }
 
