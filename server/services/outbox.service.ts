@@ -25,15 +25,12 @@ export async function enqueueMails<K extends MailKind>(
   transaction?: Transaction,
 ): Promise<Set<string>> {
   if (!messages.length) return new Set();
+  // One JSON document for the lot: PostgreSQL parses it far faster than an array of JSON texts.
   const rows = await OutboxMessage.sequelize!.query<{ delivery_key: string }>(
     `INSERT INTO outbox_messages (delivery_key, kind, to_address, payload)
-     SELECT * FROM unnest($1::text[], $2::text[], $3::text[], $4::jsonb[])
+     SELECT m.key, m.kind, m.to, m.payload FROM json_to_recordset($1::json) AS m(key text, kind text, "to" text, payload jsonb)
      ON CONFLICT (delivery_key) DO NOTHING RETURNING delivery_key`,
-    {
-      bind: [messages.map((m) => m.deliveryKey), messages.map((m) => m.kind), messages.map((m) => m.to), messages.map((m) => JSON.stringify(m.payload))],
-      transaction,
-      type: QueryTypes.SELECT,
-    },
+    { bind: [JSON.stringify(messages.map((m) => ({ key: m.deliveryKey, kind: m.kind, to: m.to, payload: m.payload })))], transaction, type: QueryTypes.SELECT },
   );
   return new Set(rows.map((r) => r.delivery_key));
 }

@@ -4,6 +4,7 @@ import type { IsoDate } from '../../server/care';
 import { assembleDigests, type DigestLinks } from '../pass/assemble-digests';
 import { localClock } from '../pass/calendar';
 import { processBatch } from '../pass/process-batch';
+import type { Timings } from '../pass/timings';
 
 // The day's pass for each site: refresh its care windows with the engine, decide who hears about
 // what, then queue one digest per person. Mail goes out through the outbox (deliver-outbox.ts).
@@ -23,6 +24,8 @@ export interface DailyPassDeps {
   /** Called after each committed batch (the crash test pauses here). */
   afterBatch?: (count: number) => Promise<void>;
   log?: (msg: string, extra?: object) => void;
+  /** Filled with the milliseconds each step took (for the benchmark). */
+  timings?: Timings;
 }
 
 export interface DailyPassResult { dates: IsoDate[]; sites: number; failed: number; windowsWritten: number; reminders: number; digests: number }
@@ -49,14 +52,14 @@ async function dueSites(db: Sequelize, now: Date, date: IsoDate | undefined): Pr
   return byDate;
 }
 
-export async function run({ db, links, now = () => new Date(), date, batchSize = DEFAULT_BATCH, signal, afterBatch, log = () => {} }: DailyPassDeps): Promise<DailyPassResult> {
+export async function run({ db, links, now = () => new Date(), date, batchSize = DEFAULT_BATCH, signal, afterBatch, log = () => {}, timings }: DailyPassDeps): Promise<DailyPassResult> {
   const worker = `${os.hostname()}:${process.pid}`;
   const result: DailyPassResult = { dates: [], sites: 0, failed: 0, windowsWritten: 0, reminders: 0, digests: 0 };
   let batches = 0;
   for (const [day, ids] of await dueSites(db, now(), date)) {
     result.dates.push(day);
     for (let from = 0; from < ids.length && !signal?.aborted; from += batchSize) {
-      const batch = await processBatch(db, ids.slice(from, from + batchSize), day, worker);
+      const batch = await processBatch(db, ids.slice(from, from + batchSize), day, worker, timings);
       result.sites += batch.claimed;
       result.failed += batch.failed;
       result.windowsWritten += batch.windowsWritten;
@@ -66,7 +69,7 @@ export async function run({ db, links, now = () => new Date(), date, batchSize =
       await afterBatch?.(batches);
     }
     // Digests go out even when another worker did the sites: whoever gets here first queues them.
-    if (!signal?.aborted) result.digests += await assembleDigests(db, day, links);
+    if (!signal?.aborted) result.digests += await assembleDigests(db, day, links, timings);
   }
   return result;
 }

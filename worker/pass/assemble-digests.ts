@@ -3,6 +3,7 @@ import type { IsoDate } from '../../server/care';
 import { unsubscribeToken } from '../../server/lib/signed-tokens';
 import type { MailPayload } from '../../server/schemas/mail';
 import { enqueueMails } from '../../server/services/outbox.service';
+import { timed, type Timings } from './timings';
 import { plantsAndSites, waitingItems, waitingUsers, weekJobs, type WaitingItem, type WeekJob } from './digest-items';
 
 // One digest per person per day: everything waiting for them goes into one outbox message keyed
@@ -12,7 +13,8 @@ import { plantsAndSites, waitingItems, waitingUsers, weekJobs, type WaitingItem,
 
 type Digest = MailPayload<'reminder-digest'>;
 const USERS_PER_TRANSACTION = 500;
-const WEEKLY_LIST_LIMIT = 40;
+// Enough for a week's work at one go; the rest are in the calendar feed and on each plant's page.
+const WEEKLY_LIST_LIMIT = 15;
 // Any number of workers may assemble at once; this lock makes them take turns per chunk of people.
 const ASSEMBLY_LOCK = 5_127_105;
 
@@ -26,8 +28,9 @@ function isStillDue(item: WaitingItem, date: IsoDate): boolean {
   return !item.isDone && item.closes !== null && item.closes >= date;
 }
 
-function weeklyFor(item: WaitingItem, jobs: WeekJob[], groupNames: Map<string, string>): Digest['weekly'][number] {
-  const mine = jobs.filter((j) => j.groupId === item.groupId && (item.tasks === null || item.tasks.includes(j.task)));
+function weeklyFor(item: WaitingItem, jobsByGroup: Map<string, WeekJob[]>, groupNames: Map<string, string>): Digest['weekly'][number] {
+  const all = jobsByGroup.get(item.groupId) ?? [];
+  const mine = item.tasks === null ? all : all.filter((j) => item.tasks!.includes(j.task));
   return {
     groupId: item.groupId, groupName: groupNames.get(item.groupId) ?? '', more: Math.max(0, mine.length - WEEKLY_LIST_LIMIT),
     jobs: mine.slice(0, WEEKLY_LIST_LIMIT).map(({ plantId, task, opens, closes }) => ({ plantId, task, opens, closes })),
@@ -42,6 +45,12 @@ async function groupNamesOf(db: Sequelize, t: Transaction, groupIds: string[]): 
 async function buildDigests(db: Sequelize, t: Transaction, items: WaitingItem[], date: IsoDate, links: DigestLinks): Promise<Map<string, Digest>> {
   const weeklyGroups = [...new Set(items.filter((i) => i.kind === 'weekly').map((i) => i.groupId))];
   const jobs = await weekJobs(db, t, weeklyGroups, date);
+  const jobsByGroup = new Map<string, WeekJob[]>();
+  for (const job of jobs) {
+    const list = jobsByGroup.get(job.groupId) ?? [];
+    list.push(job);
+    jobsByGroup.set(job.groupId, list);
+  }
   const groupNames = await groupNamesOf(db, t, weeklyGroups);
   const plantIds = new Set<string>([...items.flatMap((i) => (i.plantId ? [i.plantId] : [])), ...jobs.map((j) => j.plantId)]);
   const { plants, sites } = await plantsAndSites(db, t, [...plantIds]);
@@ -55,7 +64,7 @@ async function buildDigests(db: Sequelize, t: Transaction, items: WaitingItem[],
       };
       digests.set(item.userId, digest);
     }
-    if (item.kind === 'weekly') digest.weekly.push(weeklyFor(item, jobs, groupNames));
+    if (item.kind === 'weekly') digest.weekly.push(weeklyFor(item, jobsByGroup, groupNames));
     else if (item.plantId && plants.has(item.plantId)) {
       digest.jobs.push({
         windowId: item.windowId!, plantId: item.plantId, kind: item.kind, task: item.task!, opens: item.opens!, closes: item.closes!, basis: item.basis!, reason: item.reason!,
@@ -79,15 +88,15 @@ async function markItems(db: Sequelize, t: Transaction, ids: string[], key: stri
   );
 }
 
-async function assembleChunk(db: Sequelize, userIds: string[], date: IsoDate, links: DigestLinks): Promise<number> {
+async function assembleChunk(db: Sequelize, userIds: string[], date: IsoDate, links: DigestLinks, timings?: Timings): Promise<number> {
   return db.transaction(async (t) => {
     await db.query('SELECT pg_advisory_xact_lock($1)', { bind: [ASSEMBLY_LOCK], transaction: t });
-    const items = await waitingItems(db, t, userIds, date);
+    const items = await timed(timings, 'digests: read', () => waitingItems(db, t, userIds, date));
     const due = items.filter((i) => isStillDue(i, date));
-    const digests = await buildDigests(db, t, due, date, links);
+    const digests = await timed(timings, 'digests: read', () => buildDigests(db, t, due, date, links));
     const sendable = [...digests].filter(([, d]) => d.jobs.length > 0 || d.weekly.some((w) => w.jobs.length > 0));
     const emails = new Map(items.map((i) => [i.userId, i.email]));
-    const queued = await enqueueMails(sendable.map(([userId, payload]) => ({ deliveryKey: digestKey(userId, date), kind: 'reminder-digest' as const, to: emails.get(userId)!, payload })), t);
+    const queued = await timed(timings, 'digests: queue', () => enqueueMails(sendable.map(([userId, payload]) => ({ deliveryKey: digestKey(userId, date), kind: 'reminder-digest' as const, to: emails.get(userId)!, payload })), t));
     const hasDigest = (userId: string) => queued.has(digestKey(userId, date));
     const sendableUsers = new Set(sendable.map(([userId]) => userId));
     // Items in a queued digest name it; items nobody should get are dropped; the rest wait a day.
@@ -95,17 +104,17 @@ async function assembleChunk(db: Sequelize, userIds: string[], date: IsoDate, li
       if (!isStillDue(i, date) || !sendableUsers.has(i.userId)) return [{ id: i.id, key: `dropped:${date}` }];
       return hasDigest(i.userId) ? [{ id: i.id, key: digestKey(i.userId, date) }] : [];
     });
-    await markItems(db, t, marked.map((m) => m.id), marked.map((m) => m.key));
+    await timed(timings, 'digests: queue', () => markItems(db, t, marked.map((m) => m.id), marked.map((m) => m.key)));
     return queued.size;
   });
 }
 
 /** Queues the day's digests; answers how many were queued. */
-export async function assembleDigests(db: Sequelize, date: IsoDate, links: DigestLinks): Promise<number> {
+export async function assembleDigests(db: Sequelize, date: IsoDate, links: DigestLinks, timings?: Timings): Promise<number> {
   const users = await waitingUsers(db, date);
   let queued = 0;
   for (let from = 0; from < users.length; from += USERS_PER_TRANSACTION) {
-    queued += await assembleChunk(db, users.slice(from, from + USERS_PER_TRANSACTION), date, links);
+    queued += await assembleChunk(db, users.slice(from, from + USERS_PER_TRANSACTION), date, links, timings);
   }
   return queued;
 }

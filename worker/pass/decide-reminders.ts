@@ -1,6 +1,6 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { IsoDate } from '../../server/care';
-import { DEFAULT_LEAD_DAYS } from '../../server/schemas/reminders';
+import { DEFAULT_LEAD_DAYS, LEAD_DAYS_MAX } from '../../server/schemas/reminders';
 import { isMonday } from './calendar';
 
 // Who hears about what, decided in the database for a whole batch of sites at once. Each decision
@@ -29,6 +29,8 @@ export async function decideReminders(db: Sequelize, t: Transaction, siteIds: st
        JOIN memberships m ON m.group_id = cw.group_id
        LEFT JOIN reminder_preferences rp ON rp.user_id = m.user_id
        WHERE cw.site_id = ANY($1::uuid[]) AND cw.done_at IS NULL
+         -- The window's own dates first, so only the few windows near this day meet the members.
+         AND (cw.opens BETWEEN $2::date AND $2::date + ${LEAD_DAYS_MAX} OR cw.closes BETWEEN $2::date AND $2::date + ${CLOSING_DAYS - 1})
          AND (rp.tasks IS NULL OR cw.task = ANY(rp.tasks))
          AND (
            (cw.opens BETWEEN $2::date AND $2::date + coalesce(rp.lead_days, $3::int) AND ${wants('is_opening_on')})

@@ -5,7 +5,7 @@ import type { IsoDate } from '../../server/care';
 // their groups, and the plants and sites those mention.
 
 export interface WaitingItem {
-  id: string; userId: string; email: string; name: string; kind: 'opening' | 'closing' | 'weekly'; groupId: string; passDate: string;
+  id: string; userId: string; email: string; name: string; kind: 'opening' | 'closing' | 'weekly' | 'assigned'; groupId: string; passDate: string;
   isWanted: boolean; tasks: string[] | null; windowId: string | null; plantId: string | null; task: string | null; opens: string | null; closes: string | null;
   basis: 'readings' | 'projection' | 'calendar' | null; reason: string | null; isDone: boolean;
   degreeDays: number | null; baseC: number | null; since: string | null; reachedOn: string | null;
@@ -42,7 +42,10 @@ export async function waitingItems(db: Sequelize, t: Transaction, userIds: strin
 
 export interface WeekJob { groupId: string; plantId: string; task: string; opens: string; closes: string }
 
-/** Every job open at some point in the seven days from `date`, not yet done, per group. */
+/**
+ * Every job open at some point in the seven days from `date`, not yet done, per group: those that
+ * close this week first, then those that open this week, then the ones open all week.
+ */
 export async function weekJobs(db: Sequelize, t: Transaction, groupIds: string[], date: IsoDate): Promise<WeekJob[]> {
   if (!groupIds.length) return [];
   return db.query<WeekJob>(
@@ -51,7 +54,7 @@ export async function weekJobs(db: Sequelize, t: Transaction, groupIds: string[]
      JOIN plants p ON p.id = cw.plant_id AND p.archived_at IS NULL
      JOIN sites s ON s.id = cw.site_id AND s.archived_at IS NULL
      WHERE cw.group_id = ANY($1::uuid[]) AND cw.opens <= $2::date + 6 AND cw.closes >= $2::date AND cw.done_at IS NULL
-     ORDER BY cw.group_id, s.name, p.position_label, p.id, cw.opens`,
+     ORDER BY cw.group_id, CASE WHEN cw.closes <= $2::date + 6 THEN 0 WHEN cw.opens >= $2::date THEN 1 ELSE 2 END, s.name, p.position_label, p.id, cw.opens`,
     { bind: [groupIds, date], transaction: t, type: QueryTypes.SELECT },
   );
 }

@@ -2,8 +2,9 @@ import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { IsoDate } from '../../server/care';
 import type { HealthFlag, PlantForm, PlantTypeCode } from '../../server/schemas/catalogue';
 import { loadSiteClimates } from '../../server/services/site-climate.service';
-import { seasonsToRefresh } from './calendar';
+import { seasonOf } from './calendar';
 import { decideReminders } from './decide-reminders';
+import { timed, type Timings } from './timings';
 import { siteWindows, WindowColumns, type Climate, type PassPlant, type PassSite } from './window-rows';
 import { deleteStaleWindows, upsertWindows } from './write-windows';
 
@@ -43,19 +44,23 @@ async function loadBatch(db: Sequelize, t: Transaction, siteIds: string[]) {
   return { sites, bySite };
 }
 
-// Readings and normals for exactly the seasons each site refreshes, two queries per season.
+// Readings and normals for each site's current season, two queries per season however many sites.
+// Next season's windows (refreshed from October in the north) lie wholly in the future, so they
+// need only the normals, which do not change from season to season.
 async function climatesFor(sites: PassSite[], date: IsoDate): Promise<Map<string, Map<number, Climate>>> {
   const out = new Map<string, Map<number, Climate>>(sites.map((s) => [s.id, new Map()]));
   const bySeason = new Map<number, PassSite[]>();
   for (const site of sites) {
-    for (const season of seasonsToRefresh(date, site.latitude)) {
-      const list = bySeason.get(season) ?? [];
-      list.push(site);
-      bySeason.set(season, list);
-    }
+    const season = seasonOf(date, site.latitude);
+    const list = bySeason.get(season) ?? [];
+    list.push(site);
+    bySeason.set(season, list);
   }
   for (const [season, list] of bySeason) {
-    for (const [siteId, climate] of await loadSiteClimates(list, season)) out.get(siteId)?.set(season, climate);
+    for (const [siteId, climate] of await loadSiteClimates(list, season)) {
+      out.get(siteId)?.set(season, climate);
+      out.get(siteId)?.set(season + 1, { readings: [], normals: climate.normals });
+    }
   }
   return out;
 }
@@ -84,35 +89,45 @@ async function recordOutcomes(db: Sequelize, t: Transaction, date: IsoDate, outc
   );
 }
 
-export async function processBatch(db: Sequelize, siteIds: string[], date: IsoDate, worker: string): Promise<BatchResult> {
-  return db.transaction(async (t) => {
-    const claimed = await claim(db, t, [...siteIds].sort(), date, worker);
-    if (!claimed.length) return { claimed: 0, failed: 0, windowsWritten: 0, reminders: 0 };
-    const { sites, bySite } = await loadBatch(db, t, claimed);
-    const climates = await climatesFor(sites, date);
-    const previous = await previousFingerprints(db, t, claimed, date);
-    const changed = new WindowColumns();
-    const changedSeasons: { siteId: string; season: number }[] = [];
-    const outcomes = new Map<string, SiteOutcome>();
-    for (const site of sites) {
-      const plants = bySite.get(site.id) ?? [];
-      try {
-        const result = siteWindows(site, plants, climates.get(site.id) ?? new Map(), date);
-        const isSame = previous.get(site.id) === result.fingerprint;
-        if (!isSame) {
-          changed.append(result.columns);
-          for (const season of result.seasons) changedSeasons.push({ siteId: site.id, season });
-        }
-        outcomes.set(site.id, { siteId: site.id, status: 'done', plants: plants.length, windowsWritten: 0, reminders: 0, fingerprint: result.fingerprint, error: null });
-      } catch (err) {
-        outcomes.set(site.id, { siteId: site.id, status: 'failed', plants: plants.length, windowsWritten: 0, reminders: 0, fingerprint: null, error: String(err).slice(0, 2000) });
-      }
+/**
+ * Every site's windows from the engine. A site whose windows match its last pass's fingerprint
+ * writes nothing; a site whose plants the engine refuses is recorded as failed and writes nothing.
+ */
+function workOutWindows(sites: PassSite[], bySite: Map<string, PassPlant[]>, climates: Map<string, Map<number, Climate>>, previous: Map<string, string>, date: IsoDate) {
+  const changed = new WindowColumns();
+  const changedSeasons: { siteId: string; season: number }[] = [];
+  const outcomes = new Map<string, SiteOutcome>();
+  for (const site of sites) {
+    const plants = bySite.get(site.id) ?? [];
+    const before = changed.length;
+    const outcome: SiteOutcome = { siteId: site.id, status: 'done', plants: plants.length, windowsWritten: 0, reminders: 0, fingerprint: null, error: null };
+    try {
+      const result = siteWindows(site, plants, climates.get(site.id) ?? new Map(), date, changed);
+      outcome.fingerprint = result.fingerprint;
+      if (previous.get(site.id) === result.fingerprint) changed.truncate(before);
+      else for (const season of result.seasons) changedSeasons.push({ siteId: site.id, season });
+    } catch (err) {
+      changed.truncate(before);
+      Object.assign(outcome, { status: 'failed', fingerprint: null, error: String(err).slice(0, 2000) });
     }
-    for (const [siteId, written] of await upsertWindows(db, t, changed)) outcomes.get(siteId)!.windowsWritten = written;
-    await deleteStaleWindows(db, t, changed, changedSeasons);
+    outcomes.set(site.id, outcome);
+  }
+  return { changed, changedSeasons, outcomes };
+}
+
+export async function processBatch(db: Sequelize, siteIds: string[], date: IsoDate, worker: string, timings?: Timings): Promise<BatchResult> {
+  return db.transaction(async (t) => {
+    const claimed = await timed(timings, 'claim', () => claim(db, t, [...siteIds].sort(), date, worker));
+    if (!claimed.length) return { claimed: 0, failed: 0, windowsWritten: 0, reminders: 0 };
+    const { sites, bySite } = await timed(timings, 'read plants', () => loadBatch(db, t, claimed));
+    const climates = await timed(timings, 'read readings', () => climatesFor(sites, date));
+    const previous = await timed(timings, 'claim', () => previousFingerprints(db, t, claimed, date));
+    const { changed, changedSeasons, outcomes } = await timed(timings, 'work out windows', () => workOutWindows(sites, bySite, climates, previous, date));
+    for (const [siteId, written] of await timed(timings, 'write windows', () => upsertWindows(db, t, changed))) outcomes.get(siteId)!.windowsWritten = written;
+    await timed(timings, 'delete stale', () => deleteStaleWindows(db, t, changed, changedSeasons));
     const done = [...outcomes.values()].filter((o) => o.status === 'done').map((o) => o.siteId);
-    for (const [siteId, count] of await decideReminders(db, t, done, date)) outcomes.get(siteId)!.reminders = count;
-    await recordOutcomes(db, t, date, [...outcomes.values()]);
+    for (const [siteId, count] of await timed(timings, 'decide reminders', () => decideReminders(db, t, done, date))) outcomes.get(siteId)!.reminders = count;
+    await timed(timings, 'claim', () => recordOutcomes(db, t, date, [...outcomes.values()]));
     const list = [...outcomes.values()];
     return {
       claimed: claimed.length,

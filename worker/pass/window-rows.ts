@@ -32,12 +32,9 @@ export class WindowColumns {
     return this.plantId.length;
   }
 
-  /** Appends another site's rows (used to gather the changed sites of a batch). */
-  append(other: WindowColumns): void {
-    for (const key of Object.keys(this) as (keyof WindowColumns)[]) {
-      const mine = this[key] as unknown[];
-      for (const value of other[key] as unknown[]) mine.push(value);
-    }
+  /** Drops every row from `length` on (a site whose windows turned out unchanged). */
+  truncate(length: number): void {
+    for (const column of Object.values(this) as unknown[][]) column.length = length;
   }
 }
 
@@ -55,11 +52,14 @@ function textHash(text: string | undefined): string {
   return hash;
 }
 
-export interface SiteWindows { columns: WindowColumns; seasons: number[]; fingerprint: string }
+export interface SiteWindows { seasons: number[]; rows: number; fingerprint: string }
 
-/** Readings after `date` are left out, so a pass "as if on" a past day sees what was known then. */
-export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<number, Climate>, date: IsoDate): SiteWindows {
-  const columns = new WindowColumns();
+/**
+ * Appends the site's windows to `columns`. Readings after `date` are left out, so a pass "as if on"
+ * a past day sees what was known then.
+ */
+export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<number, Climate>, date: IsoDate, columns: WindowColumns): SiteWindows {
+  const first = columns.length;
   const hash = createHash('sha1');
   const seasons = seasonsToRefresh(date, site.latitude);
   for (const season of seasons) {
@@ -90,5 +90,6 @@ export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<n
       }
     }
   }
-  return { columns, seasons, fingerprint: `${seasons.join(',')}:${columns.length}:${hash.digest('base64')}` };
+  const rows = columns.length - first;
+  return { seasons, rows, fingerprint: `${seasons.join(',')}:${rows}:${hash.digest('base64')}` };
 }

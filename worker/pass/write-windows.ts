@@ -9,18 +9,46 @@ const CHUNK = 10_000;
 const slice = <T>(values: T[], from: number) => values.slice(from, from + CHUNK);
 
 /**
+ * The window texts (reason, source, how-to) repeat across every plant of a type at a site, so each
+ * distinct text travels once and rows carry its number: a fraction of the bytes to send and parse.
+ */
+function dictionary(values: (string | null)[][]): { texts: string[]; indexes: (number | null)[][] } {
+  const numbers = new Map<string, number>();
+  const texts: string[] = [];
+  const indexes = values.map((column) => column.map((text) => {
+    if (text === null) return null;
+    let n = numbers.get(text);
+    if (n === undefined) {
+      texts.push(text);
+      n = texts.length;
+      numbers.set(text, n);
+    }
+    return n;
+  }));
+  return { texts, indexes };
+}
+
+/**
  * Inserts new windows and updates the ones whose dates or words changed; an unchanged row is left
  * alone, so its id, done_at and computed_at stay as they were. Answers rows written per site.
  */
 export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColumns): Promise<Map<string, number>> {
   const written = new Map<string, number>();
   for (let from = 0; from < c.length; from += CHUNK) {
+    const { texts, indexes } = dictionary([slice(c.source, from), slice(c.reason, from), slice(c.detail, from)]);
     const rows = await db.query<{ site_id: string; n: string }>(
-      `WITH written AS (
+      `WITH texts AS (SELECT * FROM unnest($17::text[]) WITH ORDINALITY AS t(text, n)),
+       written AS (
          INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source, reason, detail,
            trigger_degree_days, trigger_base_c, trigger_since, trigger_reached_on, computed_at)
-         SELECT w.*, now() FROM unnest($1::uuid[], $2::uuid[], $3::uuid[], $4::int[], $5::text[], $6::text[], $7::date[], $8::date[],
-           $9::text[], $10::text[], $11::text[], $12::text[], $13::real[], $14::real[], $15::date[], $16::date[]) AS w
+         SELECT w.plant_id, w.group_id, w.site_id, w.season, w.task, w.rule_key, w.opens, w.closes, w.basis, s.text, r.text, d.text,
+           w.dd, w.base, w.since, w.reached, now()
+         FROM unnest($1::uuid[], $2::uuid[], $3::uuid[], $4::int[], $5::text[], $6::text[], $7::date[], $8::date[],
+           $9::text[], $10::int[], $11::int[], $12::int[], $13::real[], $14::real[], $15::date[], $16::date[])
+           AS w(plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source_n, reason_n, detail_n, dd, base, since, reached)
+         JOIN texts s ON s.n = w.source_n
+         JOIN texts r ON r.n = w.reason_n
+         LEFT JOIN texts d ON d.n = w.detail_n
          ON CONFLICT (plant_id, season, rule_key) DO UPDATE SET
            group_id = EXCLUDED.group_id, site_id = EXCLUDED.site_id, task = EXCLUDED.task, opens = EXCLUDED.opens, closes = EXCLUDED.closes,
            basis = EXCLUDED.basis, source = EXCLUDED.source, reason = EXCLUDED.reason, detail = EXCLUDED.detail,
@@ -36,8 +64,8 @@ export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColu
       {
         bind: [
           slice(c.plantId, from), slice(c.groupId, from), slice(c.siteId, from), slice(c.season, from), slice(c.task, from), slice(c.ruleKey, from),
-          slice(c.opens, from), slice(c.closes, from), slice(c.basis, from), slice(c.source, from), slice(c.reason, from), slice(c.detail, from),
-          slice(c.triggerDegreeDays, from), slice(c.triggerBase, from), slice(c.triggerSince, from), slice(c.triggerReachedOn, from),
+          slice(c.opens, from), slice(c.closes, from), slice(c.basis, from), indexes[0], indexes[1], indexes[2],
+          slice(c.triggerDegreeDays, from), slice(c.triggerBase, from), slice(c.triggerSince, from), slice(c.triggerReachedOn, from), texts,
         ],
         transaction: t,
         type: QueryTypes.SELECT,
