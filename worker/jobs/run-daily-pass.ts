@@ -4,6 +4,7 @@ import type { IsoDate } from '../../server/care';
 import { assembleDigests, type DigestLinks } from '../pass/assemble-digests';
 import { localClock } from '../pass/calendar';
 import { processBatch } from '../pass/process-batch';
+import { refreshStatisticsIfStale } from '../pass/write-windows';
 import type { Timings } from '../pass/timings';
 
 // The day's pass for each site: refresh its care windows with the engine, decide who hears about
@@ -64,6 +65,7 @@ export async function run({ db, links, now = () => new Date(), date, batchSize =
       result.failed += batch.failed;
       result.windowsWritten += batch.windowsWritten;
       result.reminders += batch.reminders;
+      await refreshStatisticsIfStale(db, result.windowsWritten);
       if (batch.failed) log('some sites failed their pass', { date: day, failed: batch.failed });
       batches += 1;
       await afterBatch?.(batches);

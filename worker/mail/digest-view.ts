@@ -11,7 +11,8 @@ type Digest = MailPayload<'reminder-digest'>;
 type Plant = Digest['plants'][number];
 type Job = Digest['jobs'][number];
 
-export interface JobView { title: string; when: string; why: string; reason: string; safety: JobSafety; finishBy: string | null }
+/** `cautions` leaves out the warnings an earlier job at the same site already gave; stop cautions always show. */
+export interface JobView { title: string; when: string; why: string; reason: string; safety: JobSafety; cautions: Caution[]; isSomeAbove: boolean; finishBy: string | null }
 export interface PlantView { title: string; facts: string; url: string; jobs: JobView[] }
 export interface SiteView { name: string; groupName: string; light: SiteLight; hasLines: boolean; plants: PlantView[] }
 export interface WeeklyView { groupName: string; rows: { plant: string; site: string; task: string; dates: string; url: string }[]; more: number }
@@ -36,6 +37,7 @@ function plantFacts(p: Plant): string {
 }
 
 function when(job: Job, date: IsoDate): string {
+  if (job.kind === 'assigned') return job.opens > date ? `Handed to you: opens ${longDate(job.opens)}, open until ${longDate(job.closes)}` : `Handed to you: open until ${longDate(job.closes)}`;
   if (job.kind === 'closing') return `Closing: the window ends ${longDate(job.closes)}`;
   return job.opens === date ? `Opens today, and stays open until ${longDate(job.closes)}` : `Opens ${longDate(job.opens)}, and stays open until ${longDate(job.closes)}`;
 }
@@ -49,15 +51,27 @@ function why(job: Job): string {
   return `Timed by the season's warmth: ${total} are expected around ${dayMonth(dd.reachedOn)} (projected from typical temperatures until readings cover it).`;
 }
 
-function jobView(job: Job, plant: Plant, site: Digest['sites'][number], date: IsoDate, light: SiteLight): JobView {
+function jobView(job: Job, plant: Plant, site: Digest['sites'][number], date: IsoDate, light: SiteLight, given: Set<string>): JobView {
   const safety = jobSafety(job.task, plant, site, date);
-  return { title: taskLabel(job.task), when: when(job, date), why: why(job), reason: job.reason, safety, finishBy: safety.ladder ? light.finishLadderWorkBy : null };
+  const cautions = safety.cautions.filter((c) => c.severity === 'stop' || !given.has(c.code));
+  for (const c of safety.cautions) given.add(c.code);
+  return {
+    title: taskLabel(job.task), when: when(job, date), why: why(job), reason: job.reason, safety, cautions,
+    isSomeAbove: cautions.length < safety.cautions.length, finishBy: safety.ladder ? light.finishLadderWorkBy : null,
+  };
 }
 
 // Closing windows first: they are the ones that will not wait.
 const byUrgency = (a: Job, b: Job) => (a.kind === b.kind ? (a.closes < b.closes ? -1 : 1) : a.kind === 'closing' ? -1 : 1);
 
-export function digestView(d: Digest): DigestView {
+// A job handed to the person may also be opening or closing for them: say it once, as theirs.
+function onePerWindow(jobs: Job[]): Job[] {
+  const assigned = new Set(jobs.filter((j) => j.kind === 'assigned').map((j) => j.windowId));
+  return jobs.filter((j) => j.kind === 'assigned' || !assigned.has(j.windowId));
+}
+
+export function digestView(digest: Digest): DigestView {
+  const d = { ...digest, jobs: onePerWindow(digest.jobs) };
   const plants = new Map(d.plants.map((p) => [p.id, p]));
   const url = (plantId: string) => `${d.appUrl}/plants/${plantId}`;
   const everyday = new Map<string, Caution>();
@@ -65,8 +79,9 @@ export function digestView(d: Digest): DigestView {
     const light = siteLight(site, d.date);
     const here = d.plants.filter((p) => p.siteId === site.id && d.jobs.some((j) => j.plantId === p.id));
     here.sort((a, b) => a.positionLabel.localeCompare(b.positionLabel));
+    const given = new Set<string>();
     const plantViews = here.map((p) => {
-      const jobs = d.jobs.filter((j) => j.plantId === p.id).sort(byUrgency).map((j) => jobView(j, p, site, d.date, light));
+      const jobs = d.jobs.filter((j) => j.plantId === p.id).sort(byUrgency).map((j) => jobView(j, p, site, d.date, light, given));
       for (const j of jobs) for (const c of j.safety.everyday) everyday.set(c.code, c);
       return { title: plantTitle(p), facts: plantFacts(p), url: url(p.id), jobs };
     });

@@ -12,6 +12,8 @@ export const GUIDANCE = [
 
 const LINES_NOTE = 'Overhead lines are recorded at this site. Look up before you raise a ladder or a pole, and leave any branch near the wires to the electricity network operator or a qualified line-clearance arborist.';
 
+const SAME_AS_ABOVE = 'And the other cautions given above for this site.';
+
 const lightLine = (s: SiteView) =>
   s.light.sunset ? `Sunset today ${s.light.sunset}: finish ladder and cutting work by ${s.light.finishLadderWorkBy}.` : 'No sunset today at this site: plan ladder work for good light.';
 
@@ -28,7 +30,8 @@ function jobText(job: JobView): string[] {
   if (ladder) lines.push(`    ${ladder}`);
   if (job.safety.tools.length) lines.push(`    Tools: ${job.safety.tools.join(', ')}.`);
   if (job.finishBy) lines.push(`    Finish ladder work by ${job.finishBy}.`);
-  for (const c of job.safety.cautions) lines.push(`    - ${c.severity === 'stop' ? 'STOP: ' : ''}${c.text}`);
+  for (const c of job.cautions) lines.push(`    - ${c.severity === 'stop' ? 'STOP: ' : ''}${c.text}`);
+  if (job.isSomeAbove) lines.push(`    - ${SAME_AS_ABOVE}`);
   return lines;
 }
 
@@ -55,12 +58,13 @@ const card = 'background:#fff;border:1px solid #e4dccb;border-radius:10px;paddin
 
 function jobHtml(job: JobView): string {
   const ladder = ladderLine(job);
-  const cautions = job.safety.cautions.map((c) => `<li style="margin:4px 0${c.severity === 'stop' ? ';color:#8a2a1c;font-weight:600' : ''}">${c.severity === 'stop' ? 'Stop: ' : ''}${h(c.text)}</li>`).join('');
+  const listed = job.cautions.map((c) => `<li style="margin:4px 0${c.severity === 'stop' ? ';color:#8a2a1c;font-weight:600' : ''}">${c.severity === 'stop' ? 'Stop: ' : ''}${h(c.text)}</li>`);
+  const cautions = [...listed, ...(job.isSomeAbove ? [`<li style="margin:4px 0;color:#6b675c">${h(SAME_AS_ABOVE)}</li>`] : [])].join('');
   return `<div style="border-top:1px solid #eee6d6;padding-top:10px;margin-top:10px">
 <p style="margin:0;font-weight:700;color:#3f5d2a">${h(job.title)}</p>
 <p style="margin:2px 0 6px;font-weight:600">${h(job.when)}</p>
 <p style="margin:0 0 6px;font-size:14px"><b>Why now:</b> ${h(job.why)} ${h(job.reason)}</p>
-${ladder ? `<p style="margin:0 0 4px;font-size:14px">${h(ladder)}</p>` : ''}
+${ladder ? `<p style="margin:0 0 4px;font-size:14px"><b>Ladder:</b> ${h(ladder.replace(/^Ladder: /, ''))}</p>` : ''}
 ${job.safety.tools.length ? `<p style="margin:0 0 4px;font-size:14px"><b>Tools:</b> ${h(job.safety.tools.join(', '))}</p>` : ''}
 ${job.finishBy ? `<p style="margin:0 0 4px;font-size:14px"><b>Finish ladder work by ${h(job.finishBy)}.</b></p>` : ''}
 ${cautions ? `<ul style="margin:6px 0 0;padding-left:20px;font-size:14px">${cautions}</ul>` : ''}

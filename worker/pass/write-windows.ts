@@ -80,11 +80,25 @@ export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColu
  * Removes windows a refreshed site no longer has (a plant archived or moved, its form changed, a
  * rule withdrawn). A window someone marked done stays, because the work log points at it.
  */
+/**
+ * The first pass over many sites fills care_windows from nothing, and PostgreSQL would go on
+ * planning for an empty table (reading all of it for every batch) until autovacuum caught up:
+ * once a pass has written more rows than the table's statistics know of, they are refreshed.
+ */
+export async function refreshStatisticsIfStale(db: Sequelize, writtenThisPass: number): Promise<boolean> {
+  if (writtenThisPass < 10_000) return false;
+  const [row] = await db.query<{ tuples: number }>(`SELECT reltuples AS tuples FROM pg_class WHERE oid = 'care_windows'::regclass`, { type: QueryTypes.SELECT });
+  if (row && row.tuples * 2 > writtenThisPass) return false;
+  await db.query('ANALYZE care_windows');
+  return true;
+}
+
 export async function deleteStaleWindows(db: Sequelize, t: Transaction, c: WindowColumns, refreshed: { siteId: string; season: number }[]): Promise<void> {
   if (!refreshed.length) return;
   await db.query(
     `DELETE FROM care_windows cw
-     WHERE (cw.site_id, cw.season) IN (SELECT * FROM unnest($1::uuid[], $2::int[]))
+     WHERE cw.site_id = ANY($1::uuid[])
+       AND (cw.site_id, cw.season) IN (SELECT * FROM unnest($1::uuid[], $2::int[]))
        AND cw.done_at IS NULL
        AND NOT EXISTS (SELECT 1 FROM unnest($3::uuid[], $4::int[], $5::text[]) AS k(plant_id, season, rule_key)
                        WHERE k.plant_id = cw.plant_id AND k.season = cw.season AND k.rule_key = cw.rule_key)`,
