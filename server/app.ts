@@ -16,6 +16,7 @@ import { authRouter } from './routes/auth.routes';
 import { calendarRouter } from './routes/calendar.routes';
 import { groupsRouter } from './routes/groups.routes';
 import { healthRouter } from './routes/health.routes';
+import { invitationLinkRouter } from './routes/invitations.routes';
 import { adminRouter } from './routes/operations.routes';
 import { remindersRouter } from './routes/reminders.routes';
 import { toolsRouter } from './routes/tools.routes';
@@ -70,6 +71,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api', csrfProtection);
   app.use('/api/auth', authRouter);
   app.use('/api/groups', groupsRouter);
+  app.use('/api/invitations', invitationLinkRouter);
   app.use('/api/reminders', remindersRouter);
   app.use('/api/admin', adminRouter);
   app.use('/api', apiNotFound);

@@ -5,6 +5,7 @@ import { logger } from '../server/lib/logger';
 import { migrate } from '../server/lib/migrator';
 import * as deliverOutbox from './jobs/deliver-outbox';
 import * as dailyPass from './jobs/run-daily-pass';
+import * as storeExpiry from './jobs/notify-store-expiry';
 import { createMailer } from './mailer';
 
 const log = logger.child({ process: 'worker' });
@@ -46,13 +47,23 @@ async function main(): Promise<void> {
   // A worker started at 09:20 should not wait until 10:00 to catch up on the morning's passes.
   const firstPass = setTimeout(() => void runPass().catch((err: unknown) => log.error({ err }, 'daily pass failed')), 2_000);
 
-  log.info({ schedules: { 'deliver-outbox': 'every 5 seconds', 'daily-pass': 'at minute 0 of every hour (UTC), and at start-up' }, smtp: config.SMTP_URL.replace(/\/\/[^@]*@/, '//…@') }, 'worker started');
+  // Use-by notices for stored produce; hourly so a worker that was down at any hour still catches up.
+  const storeTask = cron.schedule(
+    '5 * * * *',
+    track(async () => {
+      const result = await storeExpiry.run({ db: sequelize });
+      if (result.queued) log.info(result, 'store use-by notices queued');
+    }),
+    { name: 'notify-store-expiry', noOverlap: true, timezone: 'UTC' },
+  );
+
+  log.info({ schedules: { 'deliver-outbox': 'every 5 seconds', 'daily-pass': 'at minute 0 of every hour (UTC), and at start-up', 'notify-store-expiry': 'at minute 5 of every hour (UTC)' }, smtp: config.SMTP_URL.replace(/\/\/[^@]*@/, '//…@') }, 'worker started');
 
   const stop = async (signal: string) => {
     log.info({ signal, running: running.size }, 'stopping worker: letting running jobs finish');
     stopping.abort();
     clearTimeout(firstPass);
-    await Promise.all([outboxTask.stop(), passTask.stop()]);
+    await Promise.all([outboxTask.stop(), passTask.stop(), storeTask.stop()]);
     await Promise.allSettled([...running]);
     mailer.close();
     await sequelize.close();

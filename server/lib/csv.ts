@@ -34,7 +34,11 @@ export interface CsvRows {
 
 /** Reads CSV text with a header row; the delimiter is guessed (comma, semicolon or tab). */
 export function readCsv(text: string): CsvRows {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { delimitersToGuess: [',', ';', '\t'], skipEmptyLines: false });
+  const clean = text.replace(/^\uFEFF/, '');
+  // Guess the delimiter on the first rows without blank lines (they upset the guess), then read every
+  // line with it so each row keeps its line number.
+  const { delimiter } = Papa.parse<string[]>(clean, { delimitersToGuess: [',', ';', '\t'], skipEmptyLines: true, preview: 20 }).meta;
+  const parsed = Papa.parse<string[]>(clean, { delimiter, skipEmptyLines: false });
   const lines = parsed.data
     .map((cells, i) => ({ line: i + 1, cells: cells.map((c) => unguardCell(c.trim())) }))
     .filter((l) => l.cells.some((c) => c !== ''));

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { CareWindow } from './care-window.model';
 import { Group } from './group.model';
+import { Invitation } from './invitation.model';
 import { LogEntry } from './log-entry.model';
 import { LogEntryPlant } from './log-entry-plant.model';
 import { LogEntryWindow } from './log-entry-window.model';
@@ -13,15 +14,18 @@ import { ReminderPreference } from './reminder-preference.model';
 import { Site } from './site.model';
 import { SiteNormal } from './site-normal.model';
 import { SiteReading } from './site-reading.model';
+import { StoreBatch, StoreBatchPlant } from './store-batch.model';
 import { User } from './user.model';
 
 export { CareWindow, Group, Membership, OutboxMessage, PasswordResetToken, Plant, ReminderPreference, Site, SiteNormal, SiteReading, User };
+export { Invitation, StoreBatch, StoreBatchPlant };
 
 export { LogEntry, LogEntryPlant, LogEntryWindow, Photo };
 
 // Define every model first, then associate, so no association refers to a model not yet initialised.
 export function initModels(sequelize: Sequelize): void {
   for (const model of [User, Group, Membership, Site, Plant, PasswordResetToken, OutboxMessage, CareWindow, SiteReading, SiteNormal, ReminderPreference]) model.initModel(sequelize);
+  for (const model of [Invitation, StoreBatch, StoreBatchPlant]) model.initModel(sequelize);
   for (const model of [LogEntry, LogEntryPlant, LogEntryWindow, Photo]) model.initModel(sequelize);
 
   Group.hasMany(Membership, { foreignKey: 'groupId', as: 'memberships' });

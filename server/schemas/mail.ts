@@ -15,7 +15,7 @@ const digestSchema = z.object({
     id: z.string(), siteId: z.string(), typeCode: z.string(), cultivar: z.string(), form: z.string(), positionLabel: z.string(), heightM: z.number().nullable(),
   })),
   jobs: z.array(z.object({
-    windowId: z.string(), plantId: z.string(), kind: z.enum(['opening', 'closing']), task: z.string(), opens: z.string(), closes: z.string(),
+    windowId: z.string(), plantId: z.string(), kind: z.enum(['opening', 'closing', 'assigned']), task: z.string(), opens: z.string(), closes: z.string(),
     basis: z.enum(['readings', 'projection', 'calendar']), reason: z.string(),
     degreeDays: z.object({ total: z.number(), baseC: z.number(), since: z.string(), reachedOn: z.string().nullable() }).nullable(),
   })),
@@ -29,6 +29,13 @@ const digestSchema = z.object({
 export const mailPayloadSchemas = {
   'password-reset': z.object({ name: z.string(), resetUrl: z.string().url(), expiresInMinutes: z.number() }),
   'reminder-digest': digestSchema,
+  invitation: z.object({
+    groupName: z.string(), inviterName: z.string(), role: z.enum(['owner', 'grower', 'helper', 'viewer']), acceptUrl: z.string().url(), expiresOn: z.string(),
+  }),
+  'store-expiry': z.object({
+    name: z.string(), groupName: z.string(), what: z.string(), method: z.string(), quantity: z.string(), storedOn: z.string(), useBy: z.string(),
+    storeUrl: z.string().url(), preferencesUrl: z.string().url(),
+  }),
 } as const;
 
 export type MailKind = keyof typeof mailPayloadSchemas;
