@@ -2,7 +2,9 @@ import { QueryTypes } from 'sequelize';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { cautionsFor, daylight, planLadder } from '../../server/care';
 import { sequelize } from '../../server/db';
-import { CareWindow, OutboxMessage, ReminderPreference, Site } from '../../server/models';
+import { CareWindow, OutboxMessage, Plant, ReminderPreference, Site } from '../../server/models';
+import * as dailyPass from '../../worker/jobs/run-daily-pass';
+import { deliverQueuedMail } from '../helpers/mail';
 import { resetDatabase } from '../helpers/api';
 import { APP_URL, DAY, inboxes, orchard, passAndDeliver } from './reminder-fixtures';
 
@@ -115,4 +117,34 @@ describe('the daily pass', () => {
     expect(rows.find((r) => r.site_id === other.id)).toMatchObject({ status: 'failed' });
     expect(rows.find((r) => r.site_id === site.id)).toMatchObject({ status: 'done', error: null });
   });
+
+  it('runs each site once its own day has passed 06:00, and never sends anyone two digests on one day', async () => {
+    const { site, emails, group } = await orchard({ people: 1 });
+    const newYork = await Site.create({ groupId: group.id, name: 'Hudson plot', latitude: 41.7, longitude: -73.9, elevationM: null, timeZone: 'America/New_York', hazards: [], notes: '', archivedAt: null });
+    await Plant.create({ groupId: group.id, siteId: newYork.id, typeCode: 'fig', cultivar: 'Chicago Hardy', rootstock: '', form: 'bush', plantedYear: 2015, heightM: 2.0, positionLabel: 'By the porch', healthFlags: [], notes: '', archivedAt: null });
+    const tick = async (iso: string) => {
+      const result = await dailyPass.run({ db: sequelize, links: { appUrl: APP_URL }, now: () => new Date(iso) });
+      await deliverQueuedMail();
+      return result;
+    };
+    const passes = async () => (await sequelize.query<{ site_id: string; date: string }>(`SELECT site_id, to_char(date, 'YYYY-MM-DD') AS date FROM site_passes ORDER BY date, site_id`, { type: QueryTypes.SELECT }));
+
+    // 05:30 UTC is 06:30 in London (summer time) and 01:30 in New York.
+    expect(await tick('2026-06-24T04:30:00Z')).toMatchObject({ sites: 0 });
+    expect(await tick('2026-06-24T05:30:00Z')).toMatchObject({ sites: 1, digests: 1 });
+    expect(await passes()).toEqual([{ site_id: site.id, date: '2026-06-24' }]);
+    // New York reaches 06:00 at 10:00 UTC; its jobs must wait, because today's digest has gone.
+    expect(await tick('2026-06-24T10:30:00Z')).toMatchObject({ sites: 1, digests: 0 });
+    expect(await tick('2026-06-24T11:30:00Z')).toMatchObject({ sites: 0, digests: 0 });
+    let mails = (await inboxes(emails)).get(emails[0]!)!;
+    expect(mails).toHaveLength(1);
+    expect(mails[0]!.text).not.toContain('Chicago Hardy');
+    // The next morning in London brings them, in the next day's single digest.
+    expect(await tick('2026-06-25T05:30:00Z')).toMatchObject({ sites: 1, digests: 1 });
+    mails = (await inboxes(emails)).get(emails[0]!)!;
+    expect(mails).toHaveLength(2);
+    expect(mails.find((m) => m.subject.includes('25 June'))!.text).toContain('Chicago Hardy');
+    expect(await OutboxMessage.count()).toBe(2);
+  });
 });
+
