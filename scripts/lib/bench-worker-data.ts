@@ -57,7 +57,7 @@ export async function makeWorld(db: pg.Client, size: WorldSize): Promise<{ readi
   await insert(db, 'users', ['id', 'email', 'name', 'password_hash'], ['uuid', 'text', 'text', 'text'], users);
   // Four people a group; one in ten is also in a second group.
   const members = users.map((u, i) => [u[0], groups[i % groups.length], i < groups.length ? 'owner' : 'helper']);
-  for (let i = 0; i < size.people / 10; i += 1) members.push([users[i]![0], groups[(i * 7 + 1) % groups.length], 'viewer']);
+  for (let i = 0; i < size.people / 10; i += 1) members.push([users[i]![0], groups[(i + Math.floor(groups.length / 2)) % groups.length], 'viewer']);
   await insert(db, 'memberships', ['user_id', 'group_id', 'role'], ['uuid', 'uuid', 'text'], members);
   const sites = Array.from({ length: size.sites }, (_, i) => {
     const isSouth = random() < 0.3;

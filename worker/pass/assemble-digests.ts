@@ -31,8 +31,10 @@ function isStillDue(item: WaitingItem, date: IsoDate): boolean {
 function weeklyFor(item: WaitingItem, jobsByGroup: Map<string, WeekJob[]>, groupNames: Map<string, string>): Digest['weekly'][number] {
   const all = jobsByGroup.get(item.groupId) ?? [];
   const mine = item.tasks === null ? all : all.filter((j) => item.tasks!.includes(j.task));
+  // Jobs beyond those read are counted but not sorted by task, so a person's filter cannot apply to them.
+  const unread = Math.max(0, Number(all[0]?.groupTotal ?? 0) - all.length);
   return {
-    groupId: item.groupId, groupName: groupNames.get(item.groupId) ?? '', more: Math.max(0, mine.length - WEEKLY_LIST_LIMIT),
+    groupId: item.groupId, groupName: groupNames.get(item.groupId) ?? '', more: Math.max(0, mine.length - WEEKLY_LIST_LIMIT) + unread,
     jobs: mine.slice(0, WEEKLY_LIST_LIMIT).map(({ plantId, task, opens, closes }) => ({ plantId, task, opens, closes })),
   };
 }

@@ -40,22 +40,32 @@ export async function waitingItems(db: Sequelize, t: Transaction, userIds: strin
   );
 }
 
-export interface WeekJob { groupId: string; plantId: string; task: string; opens: string; closes: string }
+export interface WeekJob { groupId: string; plantId: string; task: string; opens: string; closes: string; groupTotal: number }
+
+/** How many of a group's week jobs are read: enough for the list even after a person's task filter. */
+export const WEEK_JOBS_READ = 60;
 
 /**
- * Every job open at some point in the seven days from `date`, not yet done, per group: those that
- * close this week first, then those that open this week, then the ones open all week.
+ * The jobs open at some point in the seven days from `date`, not yet done, per group: those that
+ * close this week first, then those that open this week, then the ones open all week. Read group by
+ * group through the (group_id, opens, closes) index, so a chunk of people never reads the whole table;
+ * `groupTotal` counts them all, beyond the ones read.
  */
 export async function weekJobs(db: Sequelize, t: Transaction, groupIds: string[], date: IsoDate): Promise<WeekJob[]> {
   if (!groupIds.length) return [];
   return db.query<WeekJob>(
-    `SELECT cw.group_id AS "groupId", cw.plant_id AS "plantId", cw.task, to_char(cw.opens, 'YYYY-MM-DD') AS opens, to_char(cw.closes, 'YYYY-MM-DD') AS closes
-     FROM care_windows cw
-     JOIN plants p ON p.id = cw.plant_id AND p.archived_at IS NULL
-     JOIN sites s ON s.id = cw.site_id AND s.archived_at IS NULL
-     WHERE cw.group_id = ANY($1::uuid[]) AND cw.opens <= $2::date + 6 AND cw.closes >= $2::date AND cw.done_at IS NULL
-     ORDER BY cw.group_id, CASE WHEN cw.closes <= $2::date + 6 THEN 0 WHEN cw.opens >= $2::date THEN 1 ELSE 2 END, s.name, p.position_label, p.id, cw.opens`,
-    { bind: [groupIds, date], transaction: t, type: QueryTypes.SELECT },
+    `SELECT g.id AS "groupId", w.plant_id AS "plantId", w.task, w.opens, w.closes, w.total AS "groupTotal"
+     FROM unnest($1::uuid[]) AS g(id)
+     CROSS JOIN LATERAL (
+       SELECT cw.plant_id, cw.task, to_char(cw.opens, 'YYYY-MM-DD') AS opens, to_char(cw.closes, 'YYYY-MM-DD') AS closes, count(*) OVER () AS total
+       FROM care_windows cw
+       JOIN plants p ON p.id = cw.plant_id AND p.archived_at IS NULL
+       JOIN sites s ON s.id = cw.site_id AND s.archived_at IS NULL
+       WHERE cw.group_id = g.id AND cw.opens <= $2::date + 6 AND cw.closes >= $2::date AND cw.done_at IS NULL
+       ORDER BY CASE WHEN cw.closes <= $2::date + 6 THEN 0 WHEN cw.opens >= $2::date THEN 1 ELSE 2 END, s.name, p.position_label, p.id, cw.opens
+       LIMIT $3
+     ) AS w`,
+    { bind: [groupIds, date, WEEK_JOBS_READ], transaction: t, type: QueryTypes.SELECT },
   );
 }
 

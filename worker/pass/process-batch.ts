@@ -104,8 +104,10 @@ function workOutWindows(sites: PassSite[], bySite: Map<string, PassPlant[]>, cli
     try {
       const result = siteWindows(site, plants, climates.get(site.id) ?? new Map(), date, changed);
       outcome.fingerprint = result.fingerprint;
-      if (previous.get(site.id) === result.fingerprint) changed.truncate(before);
-      else for (const season of result.seasons) changedSeasons.push({ siteId: site.id, season });
+      const last = previous.get(site.id);
+      if (last === result.fingerprint) changed.truncate(before);
+      // A site's first pass has nothing stale to look for: only passes write windows.
+      else if (last !== undefined) for (const season of result.seasons) changedSeasons.push({ siteId: site.id, season });
     } catch (err) {
       changed.truncate(before);
       Object.assign(outcome, { status: 'failed', fingerprint: null, error: String(err).slice(0, 2000) });
