@@ -60,7 +60,7 @@ export async function loadEntries(groupId: string, ids: string[], transaction?: 
   return ids.filter((id) => byId.has(id)).map((id) => {
     const e = byId.get(id)!;
     return {
-      id: e.id, kind: e.kind, details: e.details, summary: summarise(e.kind, e.details, e.pickingSafeFrom),
+      id: e.id, kind: e.kind, details: e.details, summary: summarise(e.kind, e.details),
       doneOn: e.doneOn, doneBy: person(names, e.doneBy), recordedBy: person(names, e.recordedBy), notes: e.notes,
       overrideReason: e.overrideReason, pickingSafeFrom: e.pickingSafeFrom,
       plants: (plantsBy.get(id) ?? []).map((p) => ({

@@ -1,12 +1,10 @@
-import { formatDay, yearOf } from '../care';
 import { leafSizeBandLabels, pruneTypeLabels, type LogDetails, type LogKind } from '../schemas/log';
 
 // One line in the grower's words for an entry's details: the history, the table and the CSV show it.
 
 const n = (x: number) => x.toLocaleString('en-GB', { maximumFractionDigits: 2 });
-const dayWithYear = (iso: string) => `${formatDay(iso)} ${yearOf(iso)}`;
 
-type Summarisers = { [K in LogKind]: (d: LogDetails[K], safeFrom: string | null) => string };
+type Summarisers = { [K in LogKind]: (d: LogDetails[K]) => string };
 
 const summarisers: Summarisers = {
   prune: (d) => `${pruneTypeLabels[d.pruneType].split(' (')[0]} prune`,
@@ -24,15 +22,16 @@ const summarisers: Summarisers = {
   pinch: () => 'Pinched out laterals',
   'leaf-pick': (d) => `${n(d.leafCount)} leaves, ${leafSizeBandLabels[d.sizeBand]}`,
   harvest: (d) => [d.weightKg !== null ? `${n(d.weightKg)} kg` : '', d.count !== null ? `${n(d.count)} picked` : ''].filter(Boolean).join(', '),
-  spray: (d, safeFrom) => `${d.product}, ${d.harvestIntervalDays}-day harvest interval${safeFrom ? `: no picking before ${dayWithYear(safeFrom)}` : ''}`,
+  // The day picking is safe again has its own line (and CSV column), so the summary leaves it out.
+  spray: (d) => `${d.product}, ${d.harvestIntervalDays}-day harvest interval`,
   water: (d) => (d.litres ? `${n(d.litres)} l` : 'Watered'),
   note: () => '',
 };
 
-export function summarise(kind: LogKind, details: Record<string, unknown>, pickingSafeFrom: string | null): string {
-  const fn = summarisers[kind] as (d: unknown, safeFrom: string | null) => string;
+export function summarise(kind: LogKind, details: Record<string, unknown>): string {
+  const fn = summarisers[kind] as (d: unknown) => string;
   try {
-    return fn(details, pickingSafeFrom);
+    return fn(details);
   } catch {
     // Details stored under an older shape must not break the history: show the kind alone.
     return '';

@@ -23,7 +23,7 @@ describe('GET /api/groups/:groupId/log/export.csv', () => {
     expect(text).toContain(`"'+1 more, ""big"" one\nsecond line"`);
     const rows = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true }).data;
     expect(rows.map((r) => r.Notes)).toEqual(['', "'-2 degrees", `'+1 more, "big" one\nsecond line`, `'=HYPERLINK("http://evil.example","click")`]);
-    expect(rows[0]).toMatchObject({ Date: '2026-05-04', Kind: 'Spray', Details: "'@SUM(A1), 7-day harvest interval: no picking before 11 May 2026", Plants: 'Victoria plum', 'No picking before': '2026-05-11' });
+    expect(rows[0]).toMatchObject({ Date: '2026-05-04', Kind: 'Spray', Details: "'@SUM(A1), 7-day harvest interval", Plants: 'Victoria plum', 'No picking before': '2026-05-11' });
   });
 
   it('exports only what the filters select', async () => {
