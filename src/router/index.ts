@@ -32,6 +32,11 @@ export const router = createRouter({
     { path: '/sites/:siteId', name: 'site', component: () => import('../views/SiteView.vue'), props: true, meta: { requiresAuth: true, requiresGroup: true, title: 'Site' } },
     { path: '/log', name: 'log', component: () => import('../views/LogView.vue'), meta: { requiresAuth: true, requiresGroup: true, title: 'Work log' } },
     { path: '/sites/:siteId/report', name: 'site-report', component: () => import('../views/SiteReportView.vue'), props: true, meta: { requiresAuth: true, requiresGroup: true, title: 'Season report' } },
+    { path: '/jobs', name: 'jobs', component: () => import('../views/JobsView.vue'), meta: { requiresAuth: true, requiresGroup: true, title: 'Jobs' } },
+    { path: '/store', name: 'store', component: () => import('../views/StoreView.vue'), meta: { requiresAuth: true, requiresGroup: true, title: 'Store' } },
+    { path: '/members', name: 'members', component: () => import('../views/MembersView.vue'), meta: { requiresAuth: true, requiresGroup: true, title: 'People' } },
+    // Open to everyone: a signed-in person joins with their account, a newcomer makes one here.
+    { path: '/invitations/:token', name: 'invitation', component: () => import('../views/InvitationView.vue'), props: true, meta: { title: 'Invitation' } },
     { path: '/tools', name: 'tools', component: () => import('../views/ToolsView.vue'), meta: { title: 'Tools' } },
     { path: '/tools/stone-fruit-check', name: 'tool-stone-fruit', component: () => import('../views/ToolStoneFruitView.vue'), meta: { title: 'Stone-fruit check' } },
     { path: '/tools/ladder', name: 'tool-ladder', component: () => import('../views/ToolLadderView.vue'), meta: { title: 'Ladder planner' } },

@@ -14,6 +14,8 @@ declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     maildevWebPort: number;
+    /** For the few journeys that must set up what the date cannot give (an open feed window in December). */
+    e2eDatabaseUrl: string;
   }
 }
 
@@ -55,6 +57,7 @@ export default async function setup(project: TestProject) {
   await waitForHealth(`${baseUrl}/api/health`, 60_000);
   project.provide('baseUrl', baseUrl);
   project.provide('maildevWebPort', mail.webPort);
+  project.provide('e2eDatabaseUrl', env.DATABASE_URL);
   console.log(`[e2e] Spurwood up at ${baseUrl} in ${Date.now() - started} ms`);
   return async () => {
     await Promise.all(children.map(stopProcess));
