@@ -3,8 +3,9 @@
 // (fsync off, as in the tests). Prints figures and asserts nothing.
 //
 // Figures: the floor (a bare SELECT of the plant and reading rows the pass reads), the first pass
-// (Monday: every window is new and everyone gets a weekly list) and the next day's pass (windows
-// mostly unchanged, as on most days). Each step runs in a fresh process so its peak memory is its own.
+// (Monday: every window is new and everyone gets a weekly list), the next day's pass (windows
+// unchanged, as on most days) and the next Monday's (windows unchanged, a weekly list for everyone).
+// Each step runs in a fresh process so its peak memory is its own.
 // Optional: PEOPLE=… SITES=… PLANTS=… in the environment.
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
@@ -21,6 +22,7 @@ import { migrate } from '../server/lib/migrator';
 const size = { people: Number(process.env.PEOPLE ?? 10_000), sites: Number(process.env.SITES ?? 5_000), plants: Number(process.env.PLANTS ?? 100_000) };
 const FIRST_DAY = '2026-06-22'; // a Monday
 const NEXT_DAY = '2026-06-23';
+const NEXT_MONDAY = '2026-06-29';
 
 const root = makeOpenFolder(fs.mkdtempSync(path.join(os.tmpdir(), 'spurwood-bench-')));
 const bin = ensurePostgres();
@@ -85,6 +87,7 @@ try {
   const cpu = (r: Record<string, unknown>) => Number(r.cpuS) + Number(r.dbCpuS);
   const first = step('pass', FIRST_DAY);
   const next = step('pass', NEXT_DAY);
+  const monday = step('pass', NEXT_MONDAY);
   const stats = new pg.Client({ connectionString: cluster.url('bench') });
   await stats.connect();
   const { rows: [mail] } = await stats.query(`SELECT round(avg(length(payload::text))) AS bytes, count(*) AS n FROM outbox_messages`);
@@ -93,7 +96,7 @@ try {
   const seconds = (ms: unknown) => `${(Number(ms) / 1000).toFixed(2)} s`;
   const ratio = (ms: unknown) => `${(Number(ms) / Number(floor.wallMs)).toFixed(1)}× the floor`;
   console.log(`Floor, bare SELECT of ${floor.plants} plants and ${floor.readings} readings: ${seconds(floor.wallMs)}, CPU ${cpu(floor).toFixed(2)} s, peak RSS ${floor.peakRssMb} MB`);
-  for (const [label, r] of [[`First pass (${FIRST_DAY}, Monday)`, first], [`Next day's pass (${NEXT_DAY})`, next]] as const) {
+  for (const [label, r] of [[`First pass (${FIRST_DAY}, Monday)`, first], [`Next day's pass (${NEXT_DAY})`, next], [`Next Monday's pass (${NEXT_MONDAY}, weekly lists)`, monday]] as const) {
     console.log(`${label}: ${seconds(r.wallMs)} (${ratio(r.wallMs)}); CPU ${cpu(r).toFixed(2)} s (${(cpu(r) / cpu(floor)).toFixed(1)}× the floor's; worker ${Number(r.cpuS).toFixed(2)} s, PostgreSQL ${Number(r.dbCpuS).toFixed(2)} s); peak RSS ${r.peakRssMb} MB (max RSS ${r.maxRssMb} MB, ${r.baselineRssMb} MB after start-up); ` +
       `${r.sites} sites, ${r.windowsWritten} windows written, ${r.reminders} reminders, ${r.digests} mails queued`);
     console.log(`  steps (s): ${Object.entries(r.steps as Record<string, number>).map(([k, v]) => `${k} ${(v / 1000).toFixed(2)}`).join(', ')}`);

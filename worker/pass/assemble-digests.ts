@@ -44,9 +44,9 @@ async function groupNamesOf(db: Sequelize, t: Transaction, groupIds: string[]): 
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
-async function buildDigests(db: Sequelize, t: Transaction, items: WaitingItem[], date: IsoDate, links: DigestLinks): Promise<Map<string, Digest>> {
+async function buildDigests(db: Sequelize, t: Transaction, items: WaitingItem[], date: IsoDate, links: DigestLinks, timings?: Timings): Promise<Map<string, Digest>> {
   const weeklyGroups = [...new Set(items.filter((i) => i.kind === 'weekly').map((i) => i.groupId))];
-  const jobs = await weekJobs(db, t, weeklyGroups, date);
+  const jobs = await timed(timings, 'digests: week jobs', () => weekJobs(db, t, weeklyGroups, date));
   const jobsByGroup = new Map<string, WeekJob[]>();
   for (const job of jobs) {
     const list = jobsByGroup.get(job.groupId) ?? [];
@@ -55,7 +55,7 @@ async function buildDigests(db: Sequelize, t: Transaction, items: WaitingItem[],
   }
   const groupNames = await groupNamesOf(db, t, weeklyGroups);
   const plantIds = new Set<string>([...items.flatMap((i) => (i.plantId ? [i.plantId] : [])), ...jobs.map((j) => j.plantId)]);
-  const { plants, sites } = await plantsAndSites(db, t, [...plantIds]);
+  const { plants, sites } = await timed(timings, 'digests: plants', () => plantsAndSites(db, t, [...plantIds]));
   const digests = new Map<string, Digest>();
   for (const item of items) {
     let digest = digests.get(item.userId);
@@ -93,9 +93,9 @@ async function markItems(db: Sequelize, t: Transaction, ids: string[], key: stri
 async function assembleChunk(db: Sequelize, userIds: string[], date: IsoDate, links: DigestLinks, timings?: Timings): Promise<number> {
   return db.transaction(async (t) => {
     await db.query('SELECT pg_advisory_xact_lock($1)', { bind: [ASSEMBLY_LOCK], transaction: t });
-    const items = await timed(timings, 'digests: read', () => waitingItems(db, t, userIds, date));
+    const items = await timed(timings, 'digests: items', () => waitingItems(db, t, userIds, date));
     const due = items.filter((i) => isStillDue(i, date));
-    const digests = await timed(timings, 'digests: read', () => buildDigests(db, t, due, date, links));
+    const digests = await timed(timings, 'digests: build', () => buildDigests(db, t, due, date, links, timings));
     const sendable = [...digests].filter(([, d]) => d.jobs.length > 0 || d.weekly.some((w) => w.jobs.length > 0));
     const emails = new Map(items.map((i) => [i.userId, i.email]));
     const queued = await timed(timings, 'digests: queue', () => enqueueMails(sendable.map(([userId, payload]) => ({ deliveryKey: digestKey(userId, date), kind: 'reminder-digest' as const, to: emails.get(userId)!, payload })), t));

@@ -11,9 +11,14 @@ export interface WaitingItem {
   degreeDays: number | null; baseC: number | null; since: string | null; reachedOn: string | null;
 }
 
+/**
+ * People with something waiting, in the order of their first group, so that a chunk of people holds
+ * whole groups and each group's week jobs and plants are read about once.
+ */
 export async function waitingUsers(db: Sequelize, date: IsoDate): Promise<string[]> {
   const rows = await db.query<{ user_id: string }>(
-    'SELECT DISTINCT user_id FROM reminder_deliveries WHERE digest_key IS NULL AND pass_date <= $1::date ORDER BY user_id',
+    `SELECT user_id FROM reminder_deliveries WHERE digest_key IS NULL AND pass_date <= $1::date
+     GROUP BY user_id ORDER BY min(group_id::text), user_id`,
     { bind: [date], type: QueryTypes.SELECT },
   );
   return rows.map((r) => r.user_id);
