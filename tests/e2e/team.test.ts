@@ -26,10 +26,11 @@ async function invitationLink(to: string): Promise<string> {
 }
 
 // No feed window is open in December (feeds fall in late winter and summer), and the e2e server runs
-// on today's real date. So the journey stores one feed window for the 'Victoria' plum, open from three
-// days ago for three weeks, straight into the database, as the worker's daily pass would write it.
-// The pass has already run for today, so it will not tidy this window away during the test.
-async function openFeedWindowOnVictoria(): Promise<void> {
+// on today's real date. So the journey stores one feed window for the 'Discovery' apple, open from
+// three days ago for three weeks, straight into the database, as the worker's daily pass would write
+// it. The pass has already run for today, so it will not tidy this window away during the test. No
+// other journey logs work on that apple, so their plant histories stay as they expect.
+async function openFeedWindowOnDiscovery(): Promise<void> {
   const db = new pg.Client({ connectionString: inject('e2eDatabaseUrl') });
   await db.connect();
   try {
@@ -37,7 +38,7 @@ async function openFeedWindowOnVictoria(): Promise<void> {
       INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source, reason)
       SELECT p.id, p.group_id, p.site_id, extract(year FROM current_date)::int, 'spring-feed', 'e2e-feed', current_date - 3, current_date + 21, 'calendar',
         'end-to-end test', 'Set up by the team journey: no feed window is open in December'
-      FROM plants p WHERE p.cultivar = 'Victoria'
+      FROM plants p WHERE p.cultivar = 'Discovery'
       ON CONFLICT (plant_id, season, rule_key) DO UPDATE SET done_at = NULL, done_by = NULL, assigned_to = NULL`);
   } finally {
     await db.end();
@@ -46,7 +47,7 @@ async function openFeedWindowOnVictoria(): Promise<void> {
 
 describe('sharing out the work', () => {
   it('owner invites a helper, who joins from the e-mail, is handed an open feed and ticks it off from "My jobs"', async () => {
-    await openFeedWindowOnVictoria();
+    await openFeedWindowOnDiscovery();
     const email = `new-helper-${Date.now()}@example.org`;
 
     // The owner invites someone new as a helper.
@@ -71,7 +72,11 @@ describe('sharing out the work', () => {
 
     // The owner hands the open feed to the new helper.
     await owner.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
-    const who = owner.getByRole('combobox', { name: 'Who does spring feed on Victoria plum' });
+    const week = owner.getByRole('region', { name: /Open this week/ });
+    await week.getByRole('article').first().waitFor();
+    // The list starts with the soonest-closing jobs; the rest are a tap away.
+    if (await week.getByRole('button', { name: /^Show all/ }).count()) await week.getByRole('button', { name: /^Show all/ }).click();
+    const who = owner.getByRole('combobox', { name: 'Who does spring feed on Discovery apple' });
     await who.click();
     await owner.getByRole('option', { name: 'Ivy Marsh' }).click();
     await owner.getByText('Handed to Ivy Marsh').waitFor();
@@ -80,11 +85,11 @@ describe('sharing out the work', () => {
     // The helper sees it under "My jobs", open, and ticks it off with what went on.
     await helper.reload();
     const mine = helper.getByRole('region', { name: 'My jobs' });
-    const job = mine.getByRole('article', { name: 'Spring feed: Victoria plum' });
+    const job = mine.getByRole('article', { name: 'Spring feed: Discovery apple' });
     await job.getByText('Open', { exact: true }).waitFor();
     await screenshot(helper, 'phone-team-my-jobs');
-    await job.getByRole('button', { name: 'Done: spring feed on Victoria plum' }).click();
-    const dialog = helper.getByRole('dialog', { name: 'Spring feed: Victoria plum' });
+    await job.getByRole('button', { name: 'Done: spring feed on Discovery apple' }).click();
+    const dialog = helper.getByRole('dialog', { name: 'Spring feed: Discovery apple' });
     await dialog.getByLabel('Feed').fill('Growmore');
     await dialog.getByLabel('Amount').fill('140');
     await screenshot(helper, 'phone-team-done');
