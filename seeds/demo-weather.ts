@@ -5,12 +5,13 @@ import { fakeStations } from '../scripts/lib/station-fake';
 import { inventedDays } from '../scripts/lib/invented-weather';
 import { demoGroup, demoSites } from './demo-scenario';
 
-// Invented weather for the demo sites (see README.md): two seasons of daily readings, 1 January
-// 2025 to 30 November 2026, and monthly normals. The readings come from the same generator the
+// Invented weather for the demo sites (see README.md): daily readings from 1 January 2025 to the
+// day before the demo is loaded, so the demo looks current whenever it starts, and monthly normals. The readings come from the same generator the
 // local station fake serves for each site's station, so "Fetch missing days" carries on seamlessly.
 
 export const DEMO_FIRST_DAY = '2025-01-01';
-export const DEMO_LAST_DAY = '2026-11-30';
+/** Yesterday in UTC at the moment of seeding: today's readings are not in yet. */
+export const demoLastDay = (now = new Date()) => new Date(now.getTime() - 86_400_000).toISOString().slice(0, 10);
 
 interface DemoWeather { stationId: string; source: 'upload' | 'station'; gap?: { from: string; to: string } }
 
@@ -36,7 +37,7 @@ export function demoNormals(stationId: string): MonthlyNormal[] {
 function demoReadings(siteId: string, weather: DemoWeather) {
   const station = fakeStations[weather.stationId]!;
   const gap = weather.gap ? new Set(dateRange(weather.gap.from, weather.gap.to)) : new Set<string>();
-  return inventedDays(`station:${weather.stationId}`, DEMO_FIRST_DAY, DEMO_LAST_DAY, station)
+  return inventedDays(`station:${weather.stationId}`, DEMO_FIRST_DAY, demoLastDay(), station)
     .filter((d) => !gap.has(d.date))
     .map((d) => ({ siteId, date: d.date, tminC: d.tmin, tmaxC: d.tmax, rainMm: d.rain, source: weather.source }));
 }
