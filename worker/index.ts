@@ -6,6 +6,7 @@ import { migrate } from '../server/lib/migrator';
 import * as deliverOutbox from './jobs/deliver-outbox';
 import * as dailyPass from './jobs/run-daily-pass';
 import * as storeExpiry from './jobs/notify-store-expiry';
+import * as stationReadings from './jobs/pull-station-readings';
 import { createMailer } from './mailer';
 
 const log = logger.child({ process: 'worker' });
@@ -57,13 +58,24 @@ async function main(): Promise<void> {
     { name: 'notify-store-expiry', noOverlap: true, timezone: 'UTC' },
   );
 
-  log.info({ schedules: { 'deliver-outbox': 'every 5 seconds', 'daily-pass': 'at minute 0 of every hour (UTC), and at start-up', 'notify-store-expiry': 'at minute 5 of every hour (UTC)' }, smtp: config.SMTP_URL.replace(/\/\/[^@]*@/, '//…@') }, 'worker started');
+  // Station-linked sites get yesterday's readings before the next hour's passes read them; the pull
+  // asks only for missing days, so running it hourly costs little and catches up after an outage.
+  const stationTask = cron.schedule(
+    '50 * * * *',
+    track(async () => {
+      const result = await stationReadings.run({ db: sequelize, log: (msg, extra) => log.warn(extra, msg) });
+      if (result.added || result.failed) log.info(result, 'station readings pulled');
+    }),
+    { name: 'pull-station-readings', noOverlap: true, timezone: 'UTC' },
+  );
+
+  log.info({ schedules: { 'deliver-outbox': 'every 5 seconds', 'daily-pass': 'at minute 0 of every hour (UTC), and at start-up', 'notify-store-expiry': 'at minute 5 of every hour (UTC)', 'pull-station-readings': 'at minute 50 of every hour (UTC)' }, smtp: config.SMTP_URL.replace(/\/\/[^@]*@/, '//…@') }, 'worker started');
 
   const stop = async (signal: string) => {
     log.info({ signal, running: running.size }, 'stopping worker: letting running jobs finish');
     stopping.abort();
     clearTimeout(firstPass);
-    await Promise.all([outboxTask.stop(), passTask.stop(), storeTask.stop()]);
+    await Promise.all([outboxTask.stop(), passTask.stop(), storeTask.stop(), stationTask.stop()]);
     await Promise.allSettled([...running]);
     mailer.close();
     await sequelize.close();
