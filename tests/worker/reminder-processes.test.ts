@@ -37,7 +37,7 @@ async function expectOneDigestEach(emails: string[], jobsEach: number): Promise<
   }
 }
 
-describe('two worker processes started at once', () => {
+describe('two worker processes started at once', { timeout: 120_000 }, () => {
   it('send each mail exactly once', async () => {
     const { emails } = await biggerOrchard(11);
     // Both start up (tsx, migrations), then begin their passes at the same instant.
@@ -55,7 +55,7 @@ describe('two worker processes started at once', () => {
   });
 });
 
-describe('a worker killed with SIGKILL in the middle of a pass', () => {
+describe('a worker killed with SIGKILL in the middle of a pass', { timeout: 120_000 }, () => {
   it('leaves the rest to the restarted worker, which sends everything once (killed after its first batch of sites)', async () => {
     const { emails } = await biggerOrchard(3);
     const first = spawnOnce(['--date', DAY, '--batch-size', '1', '--pause-at', 'batch:1']);
@@ -88,7 +88,7 @@ describe('a worker killed with SIGKILL in the middle of a pass', () => {
   });
 });
 
-describe('the mail server down, then back up', () => {
+describe('the mail server down, then back up', { timeout: 120_000 }, () => {
   it('keeps every message and delivers each exactly once', async () => {
     const { emails } = await orchard({ people: 3 });
     await dailyPass.run({ db: sequelize, links: { appUrl: APP_URL }, date: DAY });
@@ -116,7 +116,7 @@ describe('the mail server down, then back up', () => {
   });
 });
 
-describe('SIGTERM', () => {
+describe('SIGTERM', { timeout: 120_000 }, () => {
   it('stops the long-running worker cleanly', async () => {
     const child = spawn(process.execPath, ['--import', 'tsx', 'worker/index.ts'], {
       cwd: repoRoot, env: { ...process.env, NODE_ENV: 'development', LOG_LEVEL: 'info', SMTP_URL: `smtp://127.0.0.1:${inject('smtpPort')}` }, stdio: ['ignore', 'pipe', 'pipe'],
