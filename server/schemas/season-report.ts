@@ -35,5 +35,10 @@ export const seasonReportSchema = z.object({
   })),
   harvests: z.array(z.object({ plantId: z.string(), plantName: z.string(), weightKg: z.number(), count: z.number(), picks: z.number() })),
   leaves: z.array(z.object({ plantId: z.string(), plantName: z.string(), leafCount: z.number(), picks: z.number(), sizeBands: z.array(z.string()) })),
+  /** Batches stored in the season from at least one plant at this site. */
+  stored: z.array(z.object({
+    batchId: z.string(), item: z.string(), label: z.string(), quantity: z.number(), unit: z.string(), method: z.string(),
+    storedOn: z.string(), useBy: z.string(), usedOn: z.string().nullable(), plantNames: z.array(z.string()),
+  })),
 });
 export type SeasonReport = z.infer<typeof seasonReportSchema>;

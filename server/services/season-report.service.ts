@@ -33,6 +33,26 @@ async function rowsFor(groupId: string, siteId: string, from: string, to: string
   );
 }
 
+interface StoredRow { batch_id: string; item: string; label: string; quantity: number; unit: string; method: string; stored_on: string; use_by: string; used_on: string | null; cultivar: string; type_code: PlantTypeCode }
+
+async function storedFor(groupId: string, siteId: string, from: string, to: string): Promise<SeasonReport['stored']> {
+  const rows = await sequelize.query<StoredRow>(
+    `SELECT b.id AS batch_id, b.item, b.label, b.quantity, b.unit, b.method, to_char(b.stored_on, 'YYYY-MM-DD') AS stored_on,
+       to_char(b.use_by, 'YYYY-MM-DD') AS use_by, to_char(b.used_on, 'YYYY-MM-DD') AS used_on, p.cultivar, p.type_code
+     FROM store_batches b JOIN store_batch_plants bp ON bp.batch_id = b.id JOIN plants p ON p.id = bp.plant_id
+     WHERE b.group_id = :groupId AND p.site_id = :siteId AND b.stored_on BETWEEN :from AND :to
+     ORDER BY b.stored_on, b.created_at, p.cultivar`,
+    { replacements: { groupId, siteId, from, to }, type: QueryTypes.SELECT },
+  );
+  const batches = new Map<string, SeasonReport['stored'][number]>();
+  for (const r of rows) {
+    const batch = batches.get(r.batch_id) ?? { batchId: r.batch_id, item: r.item, label: r.label, quantity: r.quantity, unit: r.unit, method: r.method, storedOn: r.stored_on, useBy: r.use_by, usedOn: r.used_on, plantNames: [] };
+    batch.plantNames.push(plantLabel(r.cultivar, r.type_code));
+    batches.set(r.batch_id, batch);
+  }
+  return [...batches.values()];
+}
+
 /** The season holding today at the site unless one is asked for; north: the calendar year, south: July to June. */
 export async function seasonReport(groupId: string, q: Query): Promise<SeasonReport> {
   const site = await Site.findOne({ where: { id: q.siteId, groupId }, attributes: ['id', 'name', 'latitude', 'timeZone'] });
@@ -51,5 +71,6 @@ export async function seasonReport(groupId: string, q: Query): Promise<SeasonRep
     })),
     harvests: harvestRows(rows.filter((r) => r.kind === 'harvest')),
     leaves: leafRows(rows.filter((r) => r.kind === 'leaf-pick')),
+    stored: await storedFor(groupId, site.id, from, to),
   };
 }

@@ -73,6 +73,19 @@ describe('GET /api/groups/:groupId/log/report', () => {
     expect(report.leaves).toEqual([{ plantId: vine.id, plantName: 'Black Hamburgh grape vine (under cover)', leafCount: 40, picks: 1, sizeBands: ['10-15'] }]);
   });
 
+  it('lists what was stored in the season from this site’s plants, and nothing from other sites', async () => {
+    const f = await roleFixture();
+    const vine = await createPlant(f.group, f.site, 'Black Hamburgh', 'grape-under-cover');
+    const elsewhere = await createPlant(f.group, await createSite(f.group, 'Allotment'), 'Opal');
+    const owner = await signedIn(f.people.owner.email);
+    const store = `/api/groups/${f.group.id}/store`;
+    await owner.post(store, { item: 'vine-leaves', plantIds: [vine.id], quantity: 40, unit: 'leaves', method: 'frozen', storedOn: '2026-06-11' }).expect(201);
+    await owner.post(store, { item: 'stone-fruit', plantIds: [elsewhere.id], quantity: 3, unit: 'kg', method: 'frozen', storedOn: '2026-08-28' }).expect(201);
+    await owner.post(store, { item: 'vine-leaves', plantIds: [vine.id], quantity: 30, unit: 'leaves', method: 'frozen', storedOn: '2025-06-11' }).expect(201);
+    const report = seasonReportSchema.parse((await owner.get(logPath(f.group.id, `/report?siteId=${f.site.id}&season=2026`)).expect(200)).body);
+    expect(report.stored).toEqual([expect.objectContaining({ item: 'vine-leaves', quantity: 40, method: 'frozen', storedOn: '2026-06-11', plantNames: ['Black Hamburgh grape vine (under cover)'] })]);
+  });
+
   it('answers 404 for a site of another group', async () => {
     const f = await roleFixture();
     const theirs = await createSite(f.otherGroup);
