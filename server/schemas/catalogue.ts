@@ -42,3 +42,31 @@ export const plantFormLabels: Record<PlantForm, string> = {
   cordon: 'Cordon', espalier: 'Espalier', fan: 'Fan', stepover: 'Stepover',
   'vine-rod-and-spur': 'Vine, rod and spur', 'vine-guyot': 'Vine, Guyot', stool: 'Stool', 'cane-row': 'Cane row', other: 'Other',
 };
+
+// The jobs a care window can be for, and the words a grower reads for each. The engine's rules, the
+// reminders and the client's job lists all use this one list (DESIGN.md §5 task rules).
+export const taskCodes = [
+  'winter-prune', 'summer-prune', 'formative-prune', 'stone-fruit-prune', 'remedial-cut',
+  'spring-feed', 'fruiting-feed', 'mulch', 'fruit-thinning', 'lateral-pinching', 'bunch-thinning',
+  'leaf-picking', 'cane-cutting-out', 'tying-in', 'harvest',
+] as const;
+export type TaskCode = (typeof taskCodes)[number];
+export const taskCodeSchema = z.enum(taskCodes);
+
+export const taskLabels: Record<TaskCode, string> = {
+  'winter-prune': 'Winter pruning',
+  'summer-prune': 'Summer pruning',
+  'formative-prune': 'Shaping a young plant',
+  'stone-fruit-prune': 'Pruning stone fruit (summer)',
+  'remedial-cut': 'Cutting out dead or diseased wood',
+  'spring-feed': 'Spring feed',
+  'fruiting-feed': 'Feeding while fruiting',
+  mulch: 'Mulching',
+  'fruit-thinning': 'Thinning the fruit',
+  'lateral-pinching': 'Pinching out side shoots',
+  'bunch-thinning': 'Thinning bunches',
+  'leaf-picking': 'Picking vine leaves',
+  'cane-cutting-out': 'Cutting out old canes',
+  'tying-in': 'Tying in new shoots',
+  harvest: 'Picking the crop',
+};

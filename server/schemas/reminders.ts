@@ -1,38 +1,14 @@
 import { z } from 'zod';
+import { taskCodes, taskCodeSchema, taskLabels, type TaskCode } from './catalogue';
 import { isoDateSchema } from './common';
 
 // Reminder preferences, the calendar feed and the operator view: the API's contract for them.
 
-/**
- * The care engine's task codes and their labels (server/care/catalogue.ts), repeated here because the
- * client imports schemas but never the engine; tests/api/reminder-preferences.test.ts checks that the
- * two lists agree.
- */
-export const reminderTaskCodes = [
-  'winter-prune', 'summer-prune', 'formative-prune', 'stone-fruit-prune', 'remedial-cut',
-  'spring-feed', 'fruiting-feed', 'mulch', 'fruit-thinning', 'lateral-pinching', 'bunch-thinning',
-  'leaf-picking', 'cane-cutting-out', 'tying-in', 'harvest',
-] as const;
-export type ReminderTaskCode = (typeof reminderTaskCodes)[number];
-export const reminderTaskSchema = z.enum(reminderTaskCodes);
-
-export const reminderTaskLabels: Record<ReminderTaskCode, string> = {
-  'winter-prune': 'Winter pruning',
-  'summer-prune': 'Summer pruning',
-  'formative-prune': 'Shaping a young plant',
-  'stone-fruit-prune': 'Pruning stone fruit (summer)',
-  'remedial-cut': 'Cutting out dead or diseased wood',
-  'spring-feed': 'Spring feed',
-  'fruiting-feed': 'Feeding while fruiting',
-  mulch: 'Mulching',
-  'fruit-thinning': 'Thinning the fruit',
-  'lateral-pinching': 'Pinching out side shoots',
-  'bunch-thinning': 'Thinning bunches',
-  'leaf-picking': 'Picking vine leaves',
-  'cane-cutting-out': 'Cutting out old canes',
-  'tying-in': 'Tying in new shoots',
-  harvest: 'Picking the crop',
-};
+// Reminders can be turned on and off per task, over the same task list the engine's rules use.
+export const reminderTaskCodes = taskCodes;
+export type ReminderTaskCode = TaskCode;
+export const reminderTaskSchema = taskCodeSchema;
+export const reminderTaskLabels = taskLabels;
 
 export const LEAD_DAYS_MAX = 21;
 export const DEFAULT_LEAD_DAYS = 3;

@@ -1,18 +1,10 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { taskCodes, taskLabels } from '../../server/care';
 import { ReminderPreference } from '../../server/models';
 import { errorEnvelopeSchema } from '../../server/schemas/error';
-import { reminderPreferencesSchema, reminderTaskCodes, reminderTaskLabels } from '../../server/schemas/reminders';
+import { reminderPreferencesSchema, reminderTaskCodes } from '../../server/schemas/reminders';
 import { createUser, newClient, resetDatabase, signedIn } from '../helpers/api';
 
 beforeEach(resetDatabase);
-
-describe('the task list the client sees', () => {
-  it('matches the care engine\'s task codes and labels', () => {
-    expect([...reminderTaskCodes]).toEqual([...taskCodes]);
-    expect(reminderTaskLabels).toEqual(taskLabels);
-  });
-});
 
 describe('GET /api/reminders/preferences', () => {
   it('answers 401 when signed out', async () => {
