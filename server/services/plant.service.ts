@@ -1,6 +1,7 @@
 import { Op, type Order, type OrderItem, type WhereOptions } from 'sequelize';
 import { notFound, validationFailed } from '../lib/errors';
-import { Plant, Site } from '../models';
+import { Photo, Plant, Site } from '../models';
+import { removePhotoFiles } from './photo.service';
 import type { Plant as PlantDto, PlantCreate, PlantList, plantListQuerySchema } from '../schemas/plant';
 import type { z } from 'zod';
 
@@ -103,5 +104,8 @@ export async function setPlantArchived(groupId: string, plantId: string, archive
 
 export async function deletePlant(groupId: string, plantId: string): Promise<void> {
   const plant = await findPlant(groupId, plantId);
+  // The database drops the plant's photo rows with it; their files go too, once the rows are gone.
+  const photos = await Photo.findAll({ where: { plantId, groupId }, attributes: ['groupId', 'fileName', 'thumbName'] });
   await plant.destroy();
+  await removePhotoFiles(photos);
 }

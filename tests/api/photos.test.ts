@@ -120,4 +120,14 @@ describe('GET and DELETE /api/groups/:groupId/photos/:photoId', () => {
     await helper.delete(`/api/groups/${f.group.id}/photos/${photo.id}`).expect(204);
     expect(filesOf(f.group.id)).toEqual([]);
   });
+
+  it('removes a plant’s photo files when the owner deletes the plant', async () => {
+    const f = await roleFixture();
+    const helper = await signedIn(f.people.helper.email);
+    await upload(helper, plantPhotos(f.group.id, f.plant.id), await imageBytes('image/png'), 'a.png', 'image/png').expect(201);
+    expect(filesOf(f.group.id)).toHaveLength(2);
+    await (await signedIn(f.people.owner.email)).delete(`/api/groups/${f.group.id}/plants/${f.plant.id}`).expect(204);
+    expect(await Photo.count()).toBe(0);
+    expect(filesOf(f.group.id)).toEqual([]);
+  });
 });
