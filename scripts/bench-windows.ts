@@ -8,26 +8,14 @@ import { addDays, daysBetween } from '../server/care/dates';
 import type { DailyTemperature } from '../server/care/degree-days';
 import { seasonEnd, seasonStart } from '../server/care/projection';
 import { siteSeason, windowsForPlant, type PlantInput, type SiteInput } from '../server/care/windows';
+import { seededRandom } from './lib/seeded-random';
 
 const SITES = Number(process.env.SITES ?? 5_000);
 const PLANTS = Number(process.env.PLANTS ?? 100_000);
 const SEASON = Number(process.env.SEASON ?? 2025);
 const ON = process.env.ON ?? `${SEASON}-06-15`;
 
-// A seeded generator so every run measures the same invented world.
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const random = mulberry32(20_250_615);
-const between = (lo: number, hi: number) => lo + (hi - lo) * random();
-const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)] as T;
+const { random, between, pick } = seededRandom(20_250_615);
 
 interface BenchSite {
   site: SiteInput;

@@ -5,22 +5,11 @@ import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import { catalogue } from '../../server/care/catalogue';
 import { plantTypeCodes, type PlantForm } from '../../server/schemas/catalogue';
+import { seededRandom } from './seeded-random';
 
 export interface WorldSize { people: number; sites: number; plants: number; readingsThrough: string }
 
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const random = mulberry32(20_261_203);
-const between = (lo: number, hi: number) => lo + (hi - lo) * random();
-const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)] as T;
+const { random, between, pick } = seededRandom(20_261_203);
 
 const formsByGroup: Record<string, readonly PlantForm[]> = {
   pome: ['bush', 'half-standard', 'standard', 'pyramid', 'spindle', 'cordon', 'espalier', 'fan'],
