@@ -1,23 +1,18 @@
-import { beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe } from 'vitest';
 import { CareWindow, LogEntry, LogEntryPlant, Photo } from '../../server/models';
-import { errorEnvelopeSchema } from '../../server/schemas/error';
-import { resetDatabase, roleFixture, signedIn, type Client } from '../helpers/api';
+import { resetDatabase, roleFixture, signedIn } from '../helpers/api';
 import { feedBody, filesOf, imageBytes, logPath, upload } from '../helpers/log';
+import { members, roleMatrix, type MatrixAction, type Who } from '../helpers/role-matrix';
 
 // DESIGN.md §2 and issue 6: helpers and above log work; viewers see the log and change nothing; an
 // entry is deleted, or given photos, by its author or an owner. An outsider gets 404 everywhere.
-type Who = 'owner' | 'grower' | 'helper' | 'viewer' | 'outsider';
 type Fixture = Awaited<ReturnType<typeof roleFixture>> & { entryId: string; photoId: string };
-type Res = { status: number; body: unknown };
 
-interface Action { name: string; allowed: Who[]; call: (c: Client, f: Fixture) => Promise<Res> }
-
-const members: Who[] = ['owner', 'grower', 'helper', 'viewer'];
 const loggers: Who[] = ['owner', 'grower', 'helper'];
 const plantPhotos = (f: Fixture) => `/api/groups/${f.group.id}/plants/${f.plant.id}/photos`;
 const photo = (f: Fixture) => `/api/groups/${f.group.id}/photos/${f.photoId}`;
 
-const actions: Action[] = [
+const actions: MatrixAction<Fixture>[] = [
   { name: 'list the log', allowed: members, call: (c, f) => c.get(logPath(f.group.id)) },
   { name: 'read an entry', allowed: members, call: (c, f) => c.get(logPath(f.group.id, `/${f.entryId}`)) },
   { name: 'export the log', allowed: members, call: (c, f) => c.get(logPath(f.group.id, '/export.csv')) },
@@ -53,23 +48,5 @@ async function snapshot(f: Fixture) {
 beforeEach(resetDatabase);
 
 describe('role × action matrix for the work log and photos', () => {
-  for (const action of actions) {
-    for (const who of [...members, 'outsider'] as Who[]) {
-      const allowed = action.allowed.includes(who);
-      const expected = allowed ? 'is allowed' : who === 'outsider' ? 'answers 404' : 'answers 403';
-      it(`${action.name}: ${who} ${expected}`, async () => {
-        const f = await fixture();
-        const client = await signedIn(f.people[who].email);
-        const before = await snapshot(f);
-        const res = await action.call(client, f);
-        if (allowed) {
-          expect(res.status).toBeLessThan(300);
-          return;
-        }
-        expect(res.status).toBe(who === 'outsider' ? 404 : 403);
-        expect(errorEnvelopeSchema.parse(res.body).error.code).toBe(who === 'outsider' ? 'NOT_FOUND' : 'FORBIDDEN');
-        expect(await snapshot(f)).toBe(before);
-      });
-    }
-  }
+  roleMatrix(actions, fixture, snapshot);
 });

@@ -1,22 +1,17 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { errorEnvelopeSchema } from '../../server/schemas/error';
 import { resetDatabase, signedIn } from '../helpers/api';
 import { groupPath, teamFixture, teamSnapshot, today } from '../helpers/team';
+import { members as all, roleMatrix, type MatrixAction } from '../helpers/role-matrix';
 
 // DESIGN.md §2 for the team, jobs, store and CSV endpoints: owners do everything; growers invite
 // helpers, hand out jobs and import plants; helpers log work (tick off their jobs, store produce);
 // viewers only look. An outsider gets 404 and learns nothing. A refused call writes nothing.
-type Who = 'owner' | 'grower' | 'helper' | 'viewer' | 'outsider';
 type Fixture = Awaited<ReturnType<typeof teamFixture>>;
-type Client = Awaited<ReturnType<typeof signedIn>>;
 
-interface Action { name: string; allowed: Who[]; call: (c: Client, f: Fixture) => Promise<{ status: number }> }
-
-const all: Who[] = ['owner', 'grower', 'helper', 'viewer'];
 const csv = (f: Fixture) => ({ csv: `site,type,form\n${f.site.name},apple,cordon\n` });
 const g = (f: Fixture, rest: string) => groupPath(f.group.id, rest);
 
-const actions: Action[] = [
+const actions: MatrixAction<Fixture>[] = [
   { name: 'list invitations', allowed: ['owner', 'grower'], call: (c, f) => c.get(g(f, '/invitations')) },
   { name: 'invite a helper', allowed: ['owner', 'grower'], call: (c, f) => c.post(g(f, '/invitations'), { email: 'someone@test.example.org', role: 'helper' }) },
   { name: 'invite a grower', allowed: ['owner'], call: (c, f) => c.post(g(f, '/invitations'), { email: 'someone@test.example.org', role: 'grower' }) },
@@ -45,24 +40,7 @@ const actions: Action[] = [
 beforeEach(resetDatabase);
 
 describe('role × action matrix for the team, jobs, store and plant CSV', () => {
-  for (const action of actions) {
-    for (const who of [...all, 'outsider'] as Who[]) {
-      const allowed = action.allowed.includes(who);
-      it(`${action.name}: ${who} ${allowed ? 'is allowed' : who === 'outsider' ? 'answers 404' : 'answers 403'}`, async () => {
-        const f = await teamFixture();
-        const client = await signedIn(f.people[who].email);
-        const before = await teamSnapshot();
-        const res = await action.call(client, f);
-        if (allowed) {
-          expect(res.status, JSON.stringify((res as { body?: unknown }).body)).toBeLessThan(300);
-          return;
-        }
-        expect(res.status).toBe(who === 'outsider' ? 404 : 403);
-        expect(errorEnvelopeSchema.parse((res as { body?: unknown }).body).error.code).toBe(who === 'outsider' ? 'NOT_FOUND' : 'FORBIDDEN');
-        expect(await teamSnapshot()).toBe(before);
-      });
-    }
-  }
+  roleMatrix(actions, teamFixture, () => teamSnapshot());
 
   it('leave: a viewer, helper or grower may leave; an outsider gets 404', async () => {
     for (const who of ['viewer', 'helper', 'grower'] as const) {
