@@ -26,7 +26,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         deliveryKey: { type: DataTypes.STRING(300), allowNull: false, unique: true },
         kind: { type: DataTypes.STRING(40), allowNull: false },
         toAddress: { type: DataTypes.STRING(254), allowNull: false },
-        payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        payload: { type: DataTypes.JSON, allowNull: false, defaultValue: {} },
         status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'pending' },
         attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },

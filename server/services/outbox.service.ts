@@ -28,7 +28,7 @@ export async function enqueueMails<K extends MailKind>(
   // One JSON document for the lot: PostgreSQL parses it far faster than an array of JSON texts.
   const rows = await OutboxMessage.sequelize!.query<{ delivery_key: string }>(
     `INSERT INTO outbox_messages (delivery_key, kind, to_address, payload)
-     SELECT m.key, m.kind, m.to, m.payload FROM json_to_recordset($1::json) AS m(key text, kind text, "to" text, payload jsonb)
+     SELECT m.key, m.kind, m.to, m.payload FROM json_to_recordset($1::json) AS m(key text, kind text, "to" text, payload json)
      ON CONFLICT (delivery_key) DO NOTHING RETURNING delivery_key`,
     { bind: [JSON.stringify(messages.map((m) => ({ key: m.deliveryKey, kind: m.kind, to: m.to, payload: m.payload })))], transaction, type: QueryTypes.SELECT },
   );
