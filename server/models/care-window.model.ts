@@ -4,6 +4,8 @@ import type { WindowBasis } from '../care';
 // A plant's care window for one season, stored by the worker's daily pass (it writes in bulk with
 // SQL; this model is for reading and for the work log, which sets doneAt and doneBy). Dates are
 // calendar days as `YYYY-MM-DD`; a window's state on a day follows from opens and closes.
+// The database works out the id from plant, season and rule (a generated column), and the wording
+// (source, reason, how-to) lives in care_window_wordings, shared by every window that says the same.
 export class CareWindow extends Model<InferAttributes<CareWindow>, InferCreationAttributes<CareWindow>> {
   declare id: CreationOptional<string>;
   declare plantId: string;
@@ -15,9 +17,7 @@ export class CareWindow extends Model<InferAttributes<CareWindow>, InferCreation
   declare opens: string;
   declare closes: string;
   declare basis: WindowBasis;
-  declare source: string;
-  declare reason: string;
-  declare detail: string | null;
+  declare wordingId: string;
   declare triggerDegreeDays: number | null;
   declare triggerBaseC: number | null;
   declare triggerSince: string | null;
@@ -31,7 +31,7 @@ export class CareWindow extends Model<InferAttributes<CareWindow>, InferCreation
   static initModel(sequelize: Sequelize): void {
     CareWindow.init(
       {
-        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        id: { type: DataTypes.UUID, primaryKey: true },
         plantId: { type: DataTypes.UUID, allowNull: false },
         groupId: { type: DataTypes.UUID, allowNull: false },
         siteId: { type: DataTypes.UUID, allowNull: false },
@@ -41,9 +41,7 @@ export class CareWindow extends Model<InferAttributes<CareWindow>, InferCreation
         opens: { type: DataTypes.DATEONLY, allowNull: false },
         closes: { type: DataTypes.DATEONLY, allowNull: false },
         basis: { type: DataTypes.STRING(12), allowNull: false },
-        source: { type: DataTypes.TEXT, allowNull: false },
-        reason: { type: DataTypes.TEXT, allowNull: false },
-        detail: { type: DataTypes.TEXT, allowNull: true },
+        wordingId: { type: DataTypes.UUID, allowNull: false },
         triggerDegreeDays: { type: DataTypes.REAL, allowNull: true },
         triggerBaseC: { type: DataTypes.REAL, allowNull: true },
         triggerSince: { type: DataTypes.DATEONLY, allowNull: true },

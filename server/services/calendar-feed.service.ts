@@ -50,9 +50,10 @@ export async function calendarFeed(token: string): Promise<string> {
   const pref = TOKEN.test(token) ? await ReminderPreference.findOne({ where: { calendarTokenHash: sha256Hex(token) }, attributes: ['userId'] }) : null;
   if (!pref) throw notFound('Calendar');
   const rows = await sequelize.query<FeedRow>(
-    `SELECT cw.id, cw.task, to_char(cw.opens, 'YYYY-MM-DD') AS opens, to_char(cw.closes, 'YYYY-MM-DD') AS closes, cw.reason,
+    `SELECT cw.id, cw.task, to_char(cw.opens, 'YYYY-MM-DD') AS opens, to_char(cw.closes, 'YYYY-MM-DD') AS closes, wd.reason,
        cw.done_at IS NOT NULL AS done, cw.updated_at, p.id AS plant_id, p.type_code, p.cultivar, p.position_label, s.name AS site_name, g.name AS group_name
      FROM care_windows cw
+     JOIN care_window_wordings wd ON wd.id = cw.wording_id
      JOIN memberships m ON m.group_id = cw.group_id AND m.user_id = $1
      JOIN plants p ON p.id = cw.plant_id AND p.archived_at IS NULL
      JOIN sites s ON s.id = cw.site_id AND s.archived_at IS NULL

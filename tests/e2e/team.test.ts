@@ -34,12 +34,16 @@ async function openFeedWindowOnDiscovery(): Promise<void> {
   const db = new pg.Client({ connectionString: inject('e2eDatabaseUrl') });
   await db.connect();
   try {
+    const source = 'end-to-end test';
+    const reason = 'Set up by the team journey: no feed window is open in December';
     await db.query(`
-      INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source, reason)
-      SELECT p.id, p.group_id, p.site_id, extract(year FROM current_date)::int, 'spring-feed', 'e2e-feed', current_date - 3, current_date + 21, 'calendar',
-        'end-to-end test', 'Set up by the team journey: no feed window is open in December'
-      FROM plants p WHERE p.cultivar = 'Discovery'
-      ON CONFLICT (plant_id, season, rule_key) DO UPDATE SET done_at = NULL, done_by = NULL, assigned_to = NULL`);
+      WITH wording AS (
+        INSERT INTO care_window_wordings (id, source, reason) VALUES (care_window_wording_id($1, $2, NULL), $1, $2)
+        ON CONFLICT (id) DO UPDATE SET source = EXCLUDED.source RETURNING id)
+      INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, wording_id)
+      SELECT p.id, p.group_id, p.site_id, extract(year FROM current_date)::int, 'spring-feed', 'e2e-feed', current_date - 3, current_date + 21, 'calendar', wording.id
+      FROM plants p, wording WHERE p.cultivar = 'Discovery'
+      ON CONFLICT (id) DO UPDATE SET done_at = NULL, done_by = NULL, assigned_to = NULL`, [source, reason]);
   } finally {
     await db.end();
   }

@@ -2,6 +2,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { Jimp } from 'jimp';
+import { QueryTypes } from 'sequelize';
 import { CareWindow, type Plant } from '../../server/models';
 import type { LogEntryCreate } from '../../server/schemas/log';
 import type { Client } from './api';
@@ -33,9 +34,14 @@ export function filesOf(groupId: string): string[] {
 }
 
 export async function windowFor(plant: Plant, task: string, opens: string, closes: string, season = Number(opens.slice(0, 4))): Promise<CareWindow> {
-  return CareWindow.create({
-    plantId: plant.id, groupId: plant.groupId, siteId: plant.siteId, season, task, ruleKey: `${task}-${opens}`, opens, closes,
-    basis: 'calendar', source: 'test', reason: 'test window', detail: null, triggerDegreeDays: null, triggerBaseC: null,
-    triggerSince: null, triggerReachedOn: null, doneAt: null, doneBy: null,
-  });
+  // Raw SQL, as the worker writes windows: the id is the database's to work out (a generated column).
+  const [row] = await CareWindow.sequelize!.query<{ id: string }>(
+    `WITH wording AS (
+       INSERT INTO care_window_wordings (id, source, reason) VALUES (care_window_wording_id('test', 'test window', NULL), 'test', 'test window')
+       ON CONFLICT (id) DO UPDATE SET source = EXCLUDED.source RETURNING id)
+     INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, wording_id)
+     SELECT $1, $2, $3, $4, $5, $6, $7, $8, 'calendar', wording.id FROM wording RETURNING id`,
+    { bind: [plant.id, plant.groupId, plant.siteId, season, task, `${task}-${opens}`, opens, closes], type: QueryTypes.SELECT },
+  );
+  return (await CareWindow.findByPk(row!.id))!;
 }

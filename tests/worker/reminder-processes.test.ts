@@ -62,7 +62,10 @@ describe('a worker killed with SIGKILL in the middle of a pass', { timeout: 120_
     await first.waitFor('PAUSED batch:1');
     first.child.kill('SIGKILL');
     await first.exited;
-    expect(await sitePasses()).toBe(1);
+    // Two batches run at once, so the one beside the first may have finished too; no more.
+    const doneBeforeKill = await sitePasses();
+    expect(doneBeforeKill).toBeGreaterThanOrEqual(1);
+    expect(doneBeforeKill).toBeLessThanOrEqual(2);
     for (const mails of (await inboxes(emails)).values()) expect(mails).toHaveLength(0);
 
     const second = spawnOnce(['--date', DAY, '--batch-size', '1']);

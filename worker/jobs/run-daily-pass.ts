@@ -20,6 +20,8 @@ export interface DailyPassDeps {
   now?: () => Date;
   date?: IsoDate;
   batchSize?: number;
+  /** Batches in flight at once: while PostgreSQL writes one, the engine works out the next. */
+  lanes?: number;
   /** Set when the worker is asked to stop: the pass finishes its batch and leaves the rest for the next run. */
   signal?: AbortSignal;
   /** Called after each committed batch (the crash test pauses here). */
@@ -34,6 +36,10 @@ export interface DailyPassResult { dates: IsoDate[]; sites: number; failed: numb
 /** Hour of the local day after which a site's pass may run. */
 export const PASS_HOUR = 6;
 const DEFAULT_BATCH = 250;
+// Two suits the usual small server: one core for the engine, one for PostgreSQL's writing. Batches
+// hold different sites, so lanes touch different windows; weekly-list keys are taken in order
+// (decide-reminders.ts), so two lanes meeting on a group's list wait for each other, never deadlock.
+const DEFAULT_LANES = 2;
 
 async function dueSites(db: Sequelize, now: Date, date: IsoDate | undefined): Promise<Map<IsoDate, string[]>> {
   const sites = await db.query<{ id: string; time_zone: string }>('SELECT id, time_zone FROM sites WHERE archived_at IS NULL ORDER BY id', { type: QueryTypes.SELECT });
@@ -53,23 +59,37 @@ async function dueSites(db: Sequelize, now: Date, date: IsoDate | undefined): Pr
   return byDate;
 }
 
-export async function run({ db, links, now = () => new Date(), date, batchSize = DEFAULT_BATCH, signal, afterBatch, log = () => {}, timings }: DailyPassDeps): Promise<DailyPassResult> {
+export async function run({ db, links, now = () => new Date(), date, batchSize = DEFAULT_BATCH, lanes = DEFAULT_LANES, signal, afterBatch, log = () => {}, timings }: DailyPassDeps): Promise<DailyPassResult> {
   const worker = `${os.hostname()}:${process.pid}`;
   const result: DailyPassResult = { dates: [], sites: 0, failed: 0, windowsWritten: 0, reminders: 0, digests: 0 };
   let batches = 0;
   for (const [day, ids] of await dueSites(db, now(), date)) {
     result.dates.push(day);
-    for (let from = 0; from < ids.length && !signal?.aborted; from += batchSize) {
-      const batch = await processBatch(db, ids.slice(from, from + batchSize), day, worker, timings);
-      result.sites += batch.claimed;
-      result.failed += batch.failed;
-      result.windowsWritten += batch.windowsWritten;
-      result.reminders += batch.reminders;
-      await refreshStatisticsIfStale(db, result.windowsWritten);
-      if (batch.failed) log('some sites failed their pass', { date: day, failed: batch.failed });
-      batches += 1;
-      await afterBatch?.(batches);
-    }
+    let from = 0;
+    // While an afterBatch hook is pending (the crash test holds one open), no lane starts a batch.
+    let hooks: Promise<unknown> = Promise.resolve();
+    const lane = async () => {
+      while (from < ids.length && !signal?.aborted) {
+        await hooks;
+        if (from >= ids.length || signal?.aborted) break;
+        const siteIds = ids.slice(from, (from += batchSize));
+        const batch = await processBatch(db, siteIds, day, worker, timings);
+        result.sites += batch.claimed;
+        result.failed += batch.failed;
+        result.windowsWritten += batch.windowsWritten;
+        result.reminders += batch.reminders;
+        await refreshStatisticsIfStale(db, result.windowsWritten);
+        if (batch.failed) log('some sites failed their pass', { date: day, failed: batch.failed });
+        batches += 1;
+        const hook = afterBatch?.(batches);
+        hooks = Promise.all([hooks, hook]);
+        await hook;
+      }
+    };
+    // Every lane finishes (or fails) before the pass goes on, so nothing is left writing behind it.
+    const outcomes = await Promise.allSettled(Array.from({ length: Math.max(1, lanes) }, lane));
+    const failure = outcomes.find((o) => o.status === 'rejected');
+    if (failure) throw failure.reason;
     // Digests go out even when another worker did the sites: whoever gets here first queues them.
     if (!signal?.aborted) result.digests += await assembleDigests(db, day, links, timings);
   }

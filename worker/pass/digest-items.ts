@@ -31,13 +31,14 @@ export async function waitingItems(db: Sequelize, t: Transaction, userIds: strin
        (coalesce(rp.is_enabled, true) AND (rp.paused_until IS NULL OR rp.paused_until < $2::date)
          AND EXISTS (SELECT 1 FROM memberships m WHERE m.user_id = rd.user_id AND m.group_id = rd.group_id)) AS "isWanted",
        rp.tasks, rd.window_id AS "windowId", cw.plant_id AS "plantId", cw.task,
-       to_char(cw.opens, 'YYYY-MM-DD') AS opens, to_char(cw.closes, 'YYYY-MM-DD') AS closes, cw.basis, cw.reason,
+       to_char(cw.opens, 'YYYY-MM-DD') AS opens, to_char(cw.closes, 'YYYY-MM-DD') AS closes, cw.basis, wd.reason,
        cw.done_at IS NOT NULL AS "isDone", cw.trigger_degree_days AS "degreeDays", cw.trigger_base_c AS "baseC",
        to_char(cw.trigger_since, 'YYYY-MM-DD') AS since, to_char(cw.trigger_reached_on, 'YYYY-MM-DD') AS "reachedOn"
      FROM reminder_deliveries rd
      JOIN users u ON u.id = rd.user_id
      LEFT JOIN reminder_preferences rp ON rp.user_id = rd.user_id
      LEFT JOIN care_windows cw ON cw.id = rd.window_id
+     LEFT JOIN care_window_wordings wd ON wd.id = cw.wording_id
      WHERE rd.user_id = ANY($1::uuid[]) AND rd.digest_key IS NULL AND rd.pass_date <= $2::date
      ORDER BY rd.user_id, rd.created_at
      FOR UPDATE OF rd`,

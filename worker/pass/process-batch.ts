@@ -128,7 +128,8 @@ export async function processBatch(db: Sequelize, siteIds: string[], date: IsoDa
     for (const [siteId, written] of await timed(timings, 'write windows', () => upsertWindows(db, t, changed))) outcomes.get(siteId)!.windowsWritten = written;
     await timed(timings, 'delete stale', () => deleteStaleWindows(db, t, changed, changedSeasons));
     const done = [...outcomes.values()].filter((o) => o.status === 'done').map((o) => o.siteId);
-    for (const [siteId, count] of await timed(timings, 'decide reminders', () => decideReminders(db, t, done, date))) outcomes.get(siteId)!.reminders = count;
+    const donePlants = done.flatMap((siteId) => (bySite.get(siteId) ?? []).map((p) => p.id));
+    for (const [siteId, count] of await timed(timings, 'decide reminders', () => decideReminders(db, t, done, donePlants, date))) outcomes.get(siteId)!.reminders = count;
     await timed(timings, 'claim', () => recordOutcomes(db, t, date, [...outcomes.values()]));
     const list = [...outcomes.values()];
     return {

@@ -39,10 +39,10 @@ export class WindowColumns {
 }
 
 // Window texts repeat across every plant of a type at a site (the engine shares them), so each
-// distinct text is hashed once and the fingerprint mixes in the short hash.
+// distinct text is hashed once and the fingerprint takes the short hash.
 const textHashes = new Map<string, string>();
-function textHash(text: string | undefined): string {
-  if (text === undefined) return '-';
+function textHash(text: string | null): string {
+  if (text === null) return '-';
   let hash = textHashes.get(text);
   if (hash === undefined) {
     if (textHashes.size > 20_000) textHashes.clear();
@@ -50,6 +50,17 @@ function textHash(text: string | undefined): string {
     textHashes.set(text, hash);
   }
   return hash;
+}
+
+/** A fingerprint of rows from `first` on: every column that is written, a column at a time. */
+function fingerprintRows(columns: WindowColumns, first: number): string {
+  const hash = createHash('sha1');
+  const { plantId, groupId, season, ruleKey, task, opens, closes, basis, triggerDegreeDays, triggerReachedOn, source, reason, detail } = columns;
+  for (const column of [plantId, groupId, season, ruleKey, task, opens, closes, basis, triggerDegreeDays, triggerReachedOn] as unknown[][]) {
+    hash.update(column.slice(first).join('\n'));
+  }
+  for (const column of [source, reason, detail]) hash.update(column.slice(first).map(textHash).join('\n'));
+  return hash.digest('base64');
 }
 
 export interface SiteWindows { seasons: number[]; rows: number; fingerprint: string }
@@ -60,7 +71,6 @@ export interface SiteWindows { seasons: number[]; rows: number; fingerprint: str
  */
 export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<number, Climate>, date: IsoDate, columns: WindowColumns): SiteWindows {
   const first = columns.length;
-  const hash = createHash('sha1');
   const seasons = seasonsToRefresh(date, site.latitude);
   for (const season of seasons) {
     const climate = climates.get(season) ?? { readings: [], normals: [] };
@@ -86,10 +96,9 @@ export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<n
         columns.triggerBase.push(t ? t.base : null);
         columns.triggerSince.push(t ? t.since : null);
         columns.triggerReachedOn.push(t?.reachedOn ?? null);
-        hash.update(`${plant.id}${plant.groupId}${season}${w.key}${w.task}${w.opens}${w.closes}${w.basis}${textHash(w.reason)}${textHash(w.source)}${textHash(w.detail)}${t?.degreeDays ?? ''}${t?.reachedOn ?? ''}\n`);
       }
     }
   }
   const rows = columns.length - first;
-  return { seasons, rows, fingerprint: `${seasons.join(',')}:${rows}:${hash.digest('base64')}` };
+  return { seasons, rows, fingerprint: `${seasons.join(',')}:${rows}:${fingerprintRows(columns, first)}` };
 }

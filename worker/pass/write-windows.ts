@@ -6,66 +6,110 @@ import type { WindowColumns } from './window-rows';
 
 const CHUNK = 10_000;
 
-const slice = <T>(values: T[], from: number) => values.slice(from, from + CHUNK);
+// Array parameters go as PostgreSQL array literals made here: uuids, dates, numbers and catalogue
+// codes need no quoting, and node-postgres would otherwise escape each of a pass's millions of
+// elements one by one. A code that would need quoting is refused (it never should: codes are
+// letters, digits and hyphens).
+const SAFE_CODE = /^[A-Za-z0-9-]+$/;
+const checkedCodes = new Set<string>();
+function literal(values: readonly (string | number | null)[], from: number, codes = false): string {
+  const part = values.slice(from, from + CHUNK);
+  if (codes) {
+    for (const code of part) {
+      if (typeof code === 'string' && !checkedCodes.has(code)) {
+        if (!SAFE_CODE.test(code)) throw new Error(`Unexpected character in code ${JSON.stringify(code)}`);
+        checkedCodes.add(code);
+      }
+    }
+  }
+  return `{${part.map((v) => v ?? 'NULL').join(',')}}`;
+}
+
+// A window's wording (source, reason, how-to) is the same for every plant of a kind at a site:
+// each distinct one travels once, is stored once (care_window_wordings, named by a hash of its
+// text) and rows carry its number in the chunk.
+// Nested maps rather than one joined key: the engine hands out the same string objects, whose
+// hashes V8 keeps, so a lookup costs no new string.
+function wordings(c: WindowColumns, from: number, to: number) {
+  const numbers = new Map<string, Map<string, Map<string | null, number>>>();
+  const source: string[] = [];
+  const reason: string[] = [];
+  const detail: (string | null)[] = [];
+  const rowWording: number[] = [];
+  for (let i = from; i < to; i++) {
+    const bySource = numbers.get(c.reason[i]!) ?? numbers.set(c.reason[i]!, new Map()).get(c.reason[i]!)!;
+    const byDetail = bySource.get(c.source[i]!) ?? bySource.set(c.source[i]!, new Map()).get(c.source[i]!)!;
+    let n = byDetail.get(c.detail[i]!);
+    if (n === undefined) {
+      source.push(c.source[i]!);
+      reason.push(c.reason[i]!);
+      detail.push(c.detail[i]!);
+      n = source.length;
+      byDetail.set(c.detail[i]!, n);
+    }
+    rowWording.push(n);
+  }
+  return { source, reason, detail, rowWording };
+}
 
 /**
- * The window texts (reason, source, how-to) repeat across every plant of a type at a site, so each
- * distinct text travels once and rows carry its number: a fraction of the bytes to send and parse.
+ * Stores the wordings not stored yet, in a transaction of their own: a wording is the same whoever
+ * writes it, so it may as well stay when the batch that wrote it fails, and batches running at
+ * once then never hold each other's wordings locked. In id order, so two writers of the same new
+ * wordings queue behind each other rather than deadlock.
  */
-function dictionary(values: (string | null)[][]): { texts: string[]; indexes: (number | null)[][] } {
-  const numbers = new Map<string, number>();
-  const texts: string[] = [];
-  const indexes = values.map((column) => column.map((text) => {
-    if (text === null) return null;
-    let n = numbers.get(text);
-    if (n === undefined) {
-      texts.push(text);
-      n = texts.length;
-      numbers.set(text, n);
-    }
-    return n;
-  }));
-  return { texts, indexes };
+async function saveWordings(db: Sequelize, w: { source: string[]; reason: string[]; detail: (string | null)[] }): Promise<void> {
+  await db.query(
+    `INSERT INTO care_window_wordings (id, source, reason, detail)
+     SELECT care_window_wording_id(source, reason, detail) AS id, source, reason, detail
+     FROM unnest($1::text[], $2::text[], $3::text[]) AS t(source, reason, detail)
+     ORDER BY id
+     ON CONFLICT (id) DO NOTHING`,
+    { bind: [w.source, w.reason, w.detail] },
+  );
 }
 
 /**
  * Inserts new windows and updates the ones whose dates or words changed; an unchanged row is left
- * alone, so its id, done_at and computed_at stay as they were. Answers rows written per site.
+ * alone, so its done_at and computed_at stay as they were. A window's id follows from its plant,
+ * season and rule (care_window_id() in the database), so the upsert meets yesterday's row by it.
+ * Answers rows written per site.
  */
 export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColumns): Promise<Map<string, number>> {
   const written = new Map<string, number>();
   for (let from = 0; from < c.length; from += CHUNK) {
-    const { texts, indexes } = dictionary([slice(c.source, from), slice(c.reason, from), slice(c.detail, from)]);
+    const w = wordings(c, from, Math.min(from + CHUNK, c.length));
+    await saveWordings(db, w);
     const rows = await db.query<{ site_id: string; n: string }>(
-      `WITH texts AS (SELECT * FROM unnest($17::text[]) WITH ORDINALITY AS t(text, n)),
+      `WITH wordings AS (
+         SELECT n, care_window_wording_id(source, reason, detail) AS id
+         FROM unnest($14::text[], $15::text[], $16::text[]) WITH ORDINALITY AS t(source, reason, detail, n)),
        written AS (
-         INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source, reason, detail,
+         INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, wording_id,
            trigger_degree_days, trigger_base_c, trigger_since, trigger_reached_on, computed_at)
-         SELECT w.plant_id, w.group_id, w.site_id, w.season, w.task, w.rule_key, w.opens, w.closes, w.basis, s.text, r.text, d.text,
+         SELECT w.plant_id, w.group_id, w.site_id, w.season, w.task, w.rule_key, w.opens, w.closes, w.basis, wd.id,
            w.dd, w.base, w.since, w.reached, now()
          FROM unnest($1::uuid[], $2::uuid[], $3::uuid[], $4::int[], $5::text[], $6::text[], $7::date[], $8::date[],
-           $9::text[], $10::int[], $11::int[], $12::int[], $13::real[], $14::real[], $15::date[], $16::date[])
-           AS w(plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, source_n, reason_n, detail_n, dd, base, since, reached)
-         JOIN texts s ON s.n = w.source_n
-         JOIN texts r ON r.n = w.reason_n
-         LEFT JOIN texts d ON d.n = w.detail_n
-         ON CONFLICT (plant_id, season, rule_key) DO UPDATE SET
+           $9::text[], $10::int[], $11::real[], $12::real[], $13::date[], $17::date[])
+           AS w(plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, wording_n, dd, base, since, reached)
+         JOIN wordings wd ON wd.n = w.wording_n
+         ON CONFLICT (id) DO UPDATE SET
            group_id = EXCLUDED.group_id, site_id = EXCLUDED.site_id, task = EXCLUDED.task, opens = EXCLUDED.opens, closes = EXCLUDED.closes,
-           basis = EXCLUDED.basis, source = EXCLUDED.source, reason = EXCLUDED.reason, detail = EXCLUDED.detail,
+           basis = EXCLUDED.basis, wording_id = EXCLUDED.wording_id,
            trigger_degree_days = EXCLUDED.trigger_degree_days, trigger_base_c = EXCLUDED.trigger_base_c,
            trigger_since = EXCLUDED.trigger_since, trigger_reached_on = EXCLUDED.trigger_reached_on,
            computed_at = EXCLUDED.computed_at, updated_at = now()
          WHERE (care_windows.group_id, care_windows.site_id, care_windows.task, care_windows.opens, care_windows.closes, care_windows.basis,
-                care_windows.source, care_windows.reason, care_windows.detail, care_windows.trigger_degree_days, care_windows.trigger_reached_on)
+                care_windows.wording_id, care_windows.trigger_degree_days, care_windows.trigger_reached_on)
            IS DISTINCT FROM (EXCLUDED.group_id, EXCLUDED.site_id, EXCLUDED.task, EXCLUDED.opens, EXCLUDED.closes, EXCLUDED.basis,
-                EXCLUDED.source, EXCLUDED.reason, EXCLUDED.detail, EXCLUDED.trigger_degree_days, EXCLUDED.trigger_reached_on)
+                EXCLUDED.wording_id, EXCLUDED.trigger_degree_days, EXCLUDED.trigger_reached_on)
          RETURNING site_id)
        SELECT site_id, count(*) AS n FROM written GROUP BY site_id`,
       {
         bind: [
-          slice(c.plantId, from), slice(c.groupId, from), slice(c.siteId, from), slice(c.season, from), slice(c.task, from), slice(c.ruleKey, from),
-          slice(c.opens, from), slice(c.closes, from), slice(c.basis, from), indexes[0], indexes[1], indexes[2],
-          slice(c.triggerDegreeDays, from), slice(c.triggerBase, from), slice(c.triggerSince, from), slice(c.triggerReachedOn, from), texts,
+          literal(c.plantId, from), literal(c.groupId, from), literal(c.siteId, from), literal(c.season, from), literal(c.task, from, true), literal(c.ruleKey, from, true),
+          literal(c.opens, from), literal(c.closes, from), literal(c.basis, from, true), literal(w.rowWording, 0),
+          literal(c.triggerDegreeDays, from), literal(c.triggerBase, from), literal(c.triggerSince, from), w.source, w.reason, w.detail, literal(c.triggerReachedOn, from),
         ],
         transaction: t,
         type: QueryTypes.SELECT,
@@ -76,10 +120,6 @@ export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColu
   return written;
 }
 
-/**
- * Removes windows a refreshed site no longer has (a plant archived or moved, its form changed, a
- * rule withdrawn). A window someone marked done stays, because the work log points at it.
- */
 /**
  * The first pass over many sites fills care_windows from nothing, and PostgreSQL would go on
  * planning for an empty table (reading all of it for every batch) until autovacuum caught up:
@@ -93,12 +133,18 @@ export async function refreshStatisticsIfStale(db: Sequelize, writtenThisPass: n
   return true;
 }
 
+/**
+ * Removes the windows of a refreshed site's plants that the engine no longer gives them (a plant
+ * archived, its form changed, a rule withdrawn). A plant that moved here takes its windows along:
+ * their ids are its own, so the upsert above gave them this site. A window someone marked done
+ * stays, because the work log points at it.
+ */
 export async function deleteStaleWindows(db: Sequelize, t: Transaction, c: WindowColumns, refreshed: { siteId: string; season: number }[]): Promise<void> {
   if (!refreshed.length) return;
   await db.query(
-    `DELETE FROM care_windows cw
-     WHERE cw.site_id = ANY($1::uuid[])
-       AND (cw.site_id, cw.season) IN (SELECT * FROM unnest($1::uuid[], $2::int[]))
+    `DELETE FROM care_windows cw USING plants p
+     WHERE p.site_id = ANY($1::uuid[]) AND cw.plant_id = p.id
+       AND (p.site_id, cw.season) IN (SELECT * FROM unnest($1::uuid[], $2::int[]))
        AND cw.done_at IS NULL
        AND NOT EXISTS (SELECT 1 FROM unnest($3::uuid[], $4::int[], $5::text[]) AS k(plant_id, season, rule_key)
                        WHERE k.plant_id = cw.plant_id AND k.season = cw.season AND k.rule_key = cw.rule_key)`,
