@@ -9,18 +9,17 @@ import type { Migration } from '../lib/migrator';
 //   Wordings are never changed or deleted, so no foreign key is checked on each window written.
 // - A window's id is worked out from what makes it one window (plant, season, rule), so the primary
 //   key also does the unique constraint's job and the pass upserts on it. Ids stay the same from
-//   day to day, as before; the work log, reminders and calendar feed go on pointing at them.
+//   day to day, as before; the work log, reminders and calendar feed go on pointing at them. The id
+//   is an MD5 hash in UUID form, without a UUID version, so the API checks job ids as GUIDs.
 //
-// Windows are then found by plant (the daily pass goes from a site's plants to their windows) and by
-// group and dates (jobs, weekly lists, the calendar feed); the site index goes.
+// Every reader already knows the group (jobs, weekly lists, the calendar feed, the work log, and
+// the daily pass, which keeps to its sites within their groups), so windows are found by group and
+// dates alone; the site index goes, and the plant index with the unique constraint.
 export const up: Migration = async ({ context: sql }) => {
   await sql.query(`
-    -- An MD5 name hash with the version and variant bits of an RFC 9562 version 8 ("custom") UUID,
-    -- so the id passes the same checks as any other.
     CREATE FUNCTION care_window_id(plant_id uuid, season integer, rule_key text) RETURNS uuid
       LANGUAGE sql IMMUTABLE PARALLEL SAFE
-      RETURN overlay(overlay(md5(plant_id::text || '/' || season::text || '/' || rule_key) placing '8' from 13 for 1)
-        placing translate(substr(md5(plant_id::text || '/' || season::text || '/' || rule_key), 17, 1), '0123456789abcdef', '89ab89ab89ab89ab') from 17 for 1)::uuid;
+      RETURN md5(plant_id::text || '/' || season::text || '/' || rule_key)::uuid;
     CREATE FUNCTION care_window_wording_id(source text, reason text, detail text) RETURNS uuid
       LANGUAGE sql IMMUTABLE PARALLEL SAFE
       RETURN md5(source || chr(31) || reason || chr(31) || coalesce(detail, chr(30)))::uuid;
@@ -56,7 +55,6 @@ export const up: Migration = async ({ context: sql }) => {
     ALTER TABLE care_windows ADD PRIMARY KEY (id);
     ALTER TABLE care_windows DROP CONSTRAINT care_windows_plant_id_season_rule_key_key;
     DROP INDEX care_windows_site_season;
-    CREATE INDEX care_windows_plant ON care_windows (plant_id);
     ALTER TABLE care_windows DROP COLUMN source, DROP COLUMN reason, DROP COLUMN detail;
 
     ALTER TABLE log_entry_windows ADD CONSTRAINT log_entry_windows_window_id_fkey FOREIGN KEY (window_id) REFERENCES care_windows(id) ON DELETE CASCADE;
@@ -79,7 +77,6 @@ export const down: Migration = async ({ context: sql }) => {
     ALTER TABLE care_windows ALTER COLUMN id SET DEFAULT gen_random_uuid();
     ALTER TABLE care_windows ADD PRIMARY KEY (id);
     ALTER TABLE care_windows ADD CONSTRAINT care_windows_plant_id_season_rule_key_key UNIQUE (plant_id, season, rule_key);
-    DROP INDEX care_windows_plant;
     CREATE INDEX care_windows_site_season ON care_windows (site_id, season);
     ALTER TABLE log_entry_windows ADD CONSTRAINT log_entry_windows_window_id_fkey FOREIGN KEY (window_id) REFERENCES care_windows(id) ON DELETE CASCADE;
     ALTER TABLE reminder_deliveries ADD CONSTRAINT reminder_deliveries_window_id_fkey FOREIGN KEY (window_id) REFERENCES care_windows(id) ON DELETE CASCADE;

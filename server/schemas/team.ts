@@ -56,7 +56,8 @@ export type MemberRole = z.infer<typeof memberRoleSchema>;
 
 // ---- Jobs ----
 
-export const windowParamsSchema = z.object({ windowId: z.uuid({ message: 'Not a valid job id' }) }).loose();
+// Window ids are hashes in UUID form (care_window_id() in the database), without a UUID version.
+export const windowParamsSchema = z.object({ windowId: z.guid({ message: 'Not a valid job id' }) }).loose();
 
 /** Hand a window to a person, or take it back (null). */
 export const assignmentSchema = z.object({ userId: z.uuid({ message: 'Choose a person' }).nullable() });
