@@ -16,19 +16,22 @@ const wants = (flag: string) => `
   coalesce(rp.is_enabled, true) AND coalesce(rp.${flag}, true)
   AND (rp.paused_until IS NULL OR rp.paused_until < $1::date)`;
 
-/** `plantIds` are the sites' plants in use, as the batch read them: their windows are looked up by plant. */
-export async function decideReminders(db: Sequelize, t: Transaction, siteIds: string[], plantIds: string[], date: IsoDate): Promise<Map<string, number>> {
+/** Windows are found through their groups' (group_id, opens, closes) index, then kept to the batch's sites. */
+export async function decideReminders(db: Sequelize, t: Transaction, sites: { id: string; groupId: string }[], date: IsoDate): Promise<Map<string, number>> {
   const counts = new Map<string, number>();
-  if (!siteIds.length) return counts;
+  if (!sites.length) return counts;
+  const siteIds = sites.map((s) => s.id);
+  const groupIds = [...new Set(sites.map((s) => s.groupId))];
   // A window shorter than a week is "closing" from its first day: its opening reminder says enough.
   const rows = await db.query<{ site_id: string; n: string }>(
     `WITH due AS (
        SELECT m.user_id, cw.group_id, cw.id AS window_id,
          CASE WHEN cw.opens >= $1::date THEN 'opening' ELSE 'closing' END AS kind
        FROM care_windows cw
+       JOIN plants p ON p.id = cw.plant_id AND p.archived_at IS NULL
        JOIN memberships m ON m.group_id = cw.group_id
        LEFT JOIN reminder_preferences rp ON rp.user_id = m.user_id
-       WHERE cw.plant_id = ANY($3::uuid[]) AND cw.done_at IS NULL
+       WHERE cw.group_id = ANY($3::uuid[]) AND cw.site_id = ANY($4::uuid[]) AND cw.done_at IS NULL
          -- The window's own dates first, so only the few windows near this day meet the members.
          AND (cw.opens BETWEEN $1::date AND $1::date + ${LEAD_DAYS_MAX} OR cw.closes BETWEEN $1::date AND $1::date + ${CLOSING_DAYS - 1})
          AND (rp.tasks IS NULL OR cw.task = ANY(rp.tasks))
@@ -44,7 +47,7 @@ export async function decideReminders(db: Sequelize, t: Transaction, siteIds: st
        RETURNING window_id
      )
      SELECT cw.site_id, count(*) AS n FROM inserted JOIN care_windows cw ON cw.id = inserted.window_id GROUP BY cw.site_id`,
-    { bind: [date, DEFAULT_LEAD_DAYS, plantIds], transaction: t, type: QueryTypes.SELECT },
+    { bind: [date, DEFAULT_LEAD_DAYS, groupIds, siteIds], transaction: t, type: QueryTypes.SELECT },
   );
   for (const r of rows) counts.set(r.site_id, Number(r.n));
   if (isMonday(date)) await decideWeeklyLists(db, t, siteIds, date);

@@ -29,6 +29,8 @@ async function claim(db: Sequelize, t: Transaction, siteIds: string[], date: Iso
   return rows.map((r) => r.site_id);
 }
 
+// The plants are locked against deletion until the batch commits: care_windows has no foreign key
+// to check each window's plant (see the migration 20261206-0003), so this stands in for it.
 async function loadBatch(db: Sequelize, t: Transaction, siteIds: string[]) {
   const sites = await db.query<PassSite>(
     `SELECT id, group_id AS "groupId", latitude, longitude, time_zone AS "timeZone" FROM sites WHERE id = ANY($1::uuid[])`,
@@ -36,7 +38,8 @@ async function loadBatch(db: Sequelize, t: Transaction, siteIds: string[]) {
   );
   const plants = await db.query<PassPlant>(
     `SELECT id, group_id AS "groupId", site_id AS "siteId", type_code AS "typeCode", form, planted_year AS "plantedYear", health_flags AS "healthFlags"
-     FROM plants WHERE site_id = ANY($1::uuid[]) AND archived_at IS NULL ORDER BY site_id, id`,
+     FROM plants WHERE site_id = ANY($1::uuid[]) AND archived_at IS NULL ORDER BY site_id, id
+     FOR KEY SHARE`,
     { bind: [siteIds], transaction: t, type: QueryTypes.SELECT },
   );
   const bySite = new Map<string, PassPlant[]>(sites.map((s) => [s.id, []]));
@@ -95,7 +98,7 @@ async function recordOutcomes(db: Sequelize, t: Transaction, date: IsoDate, outc
  */
 function workOutWindows(sites: PassSite[], bySite: Map<string, PassPlant[]>, climates: Map<string, Map<number, Climate>>, previous: Map<string, string>, date: IsoDate) {
   const changed = new WindowColumns();
-  const changedSeasons: { siteId: string; season: number }[] = [];
+  const changedSeasons: { siteId: string; groupId: string; season: number }[] = [];
   const outcomes = new Map<string, SiteOutcome>();
   for (const site of sites) {
     const plants = bySite.get(site.id) ?? [];
@@ -107,7 +110,7 @@ function workOutWindows(sites: PassSite[], bySite: Map<string, PassPlant[]>, cli
       const last = previous.get(site.id);
       if (last === result.fingerprint) changed.truncate(before);
       // A site's first pass has nothing stale to look for: only passes write windows.
-      else if (last !== undefined) for (const season of result.seasons) changedSeasons.push({ siteId: site.id, season });
+      else if (last !== undefined) for (const season of result.seasons) changedSeasons.push({ siteId: site.id, groupId: site.groupId, season });
     } catch (err) {
       changed.truncate(before);
       Object.assign(outcome, { status: 'failed', fingerprint: null, error: String(err).slice(0, 2000) });
@@ -127,9 +130,8 @@ export async function processBatch(db: Sequelize, siteIds: string[], date: IsoDa
     const { changed, changedSeasons, outcomes } = await timed(timings, 'work out windows', () => workOutWindows(sites, bySite, climates, previous, date));
     for (const [siteId, written] of await timed(timings, 'write windows', () => upsertWindows(db, t, changed))) outcomes.get(siteId)!.windowsWritten = written;
     await timed(timings, 'delete stale', () => deleteStaleWindows(db, t, changed, changedSeasons));
-    const done = [...outcomes.values()].filter((o) => o.status === 'done').map((o) => o.siteId);
-    const donePlants = done.flatMap((siteId) => (bySite.get(siteId) ?? []).map((p) => p.id));
-    for (const [siteId, count] of await timed(timings, 'decide reminders', () => decideReminders(db, t, done, donePlants, date))) outcomes.get(siteId)!.reminders = count;
+    const done = sites.filter((s) => outcomes.get(s.id)!.status === 'done');
+    for (const [siteId, count] of await timed(timings, 'decide reminders', () => decideReminders(db, t, done, date))) outcomes.get(siteId)!.reminders = count;
     await timed(timings, 'claim', () => recordOutcomes(db, t, date, [...outcomes.values()]));
     const list = [...outcomes.values()];
     return {

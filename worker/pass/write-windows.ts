@@ -139,15 +139,18 @@ export async function refreshStatisticsIfStale(db: Sequelize, writtenThisPass: n
  * their ids are its own, so the upsert above gave them this site. A window someone marked done
  * stays, because the work log points at it.
  */
-export async function deleteStaleWindows(db: Sequelize, t: Transaction, c: WindowColumns, refreshed: { siteId: string; season: number }[]): Promise<void> {
+export async function deleteStaleWindows(db: Sequelize, t: Transaction, c: WindowColumns, refreshed: { siteId: string; groupId: string; season: number }[]): Promise<void> {
   if (!refreshed.length) return;
   await db.query(
     `DELETE FROM care_windows cw USING plants p
-     WHERE p.site_id = ANY($1::uuid[]) AND cw.plant_id = p.id
+     WHERE cw.group_id = ANY($6::uuid[]) AND p.id = cw.plant_id AND p.site_id = ANY($1::uuid[])
        AND (p.site_id, cw.season) IN (SELECT * FROM unnest($1::uuid[], $2::int[]))
        AND cw.done_at IS NULL
        AND NOT EXISTS (SELECT 1 FROM unnest($3::uuid[], $4::int[], $5::text[]) AS k(plant_id, season, rule_key)
                        WHERE k.plant_id = cw.plant_id AND k.season = cw.season AND k.rule_key = cw.rule_key)`,
-    { bind: [refreshed.map((r) => r.siteId), refreshed.map((r) => r.season), c.plantId, c.season, c.ruleKey], transaction: t },
+    {
+      bind: [refreshed.map((r) => r.siteId), refreshed.map((r) => r.season), c.plantId, c.season, c.ruleKey, [...new Set(refreshed.map((r) => r.groupId))]],
+      transaction: t,
+    },
   );
 }
