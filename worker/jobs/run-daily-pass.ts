@@ -91,7 +91,7 @@ export async function run({ db, links, now = () => new Date(), date, batchSize =
     const failure = outcomes.find((o) => o.status === 'rejected');
     if (failure) throw failure.reason;
     // Digests go out even when another worker did the sites: whoever gets here first queues them.
-    if (!signal?.aborted) result.digests += await assembleDigests(db, day, links, timings);
+    if (!signal?.aborted) result.digests += await assembleDigests(db, day, links, timings, lanes);
   }
   return result;
 }

@@ -15,8 +15,6 @@ type Digest = MailPayload<'reminder-digest'>;
 const USERS_PER_TRANSACTION = 500;
 // Enough for a week's work at one go; the rest are in the calendar feed and on each plant's page.
 const WEEKLY_LIST_LIMIT = 15;
-// Any number of workers may assemble at once; this lock makes them take turns per chunk of people.
-const ASSEMBLY_LOCK = 5_127_105;
 
 export interface DigestLinks { appUrl: string }
 
@@ -92,7 +90,6 @@ async function markItems(db: Sequelize, t: Transaction, ids: string[], key: stri
 
 async function assembleChunk(db: Sequelize, userIds: string[], date: IsoDate, links: DigestLinks, timings?: Timings): Promise<number> {
   return db.transaction(async (t) => {
-    await db.query('SELECT pg_advisory_xact_lock($1)', { bind: [ASSEMBLY_LOCK], transaction: t });
     const items = await timed(timings, 'digests: items', () => waitingItems(db, t, userIds, date));
     const due = items.filter((i) => isStillDue(i, date));
     const digests = await timed(timings, 'digests: build', () => buildDigests(db, t, due, date, links, timings));
@@ -111,12 +108,24 @@ async function assembleChunk(db: Sequelize, userIds: string[], date: IsoDate, li
   });
 }
 
-/** Queues the day's digests; answers how many were queued. */
-export async function assembleDigests(db: Sequelize, date: IsoDate, links: DigestLinks, timings?: Timings): Promise<number> {
+/**
+ * Queues the day's digests; answers how many were queued. Chunks of people go `lanes` at a time, and
+ * any number of workers may assemble at once: each chunk locks its people's waiting items in one
+ * order (waitingItems), so a second worker meeting the same people waits, then finds them taken.
+ */
+export async function assembleDigests(db: Sequelize, date: IsoDate, links: DigestLinks, timings?: Timings, lanes = 1): Promise<number> {
   const users = await waitingUsers(db, date);
   let queued = 0;
-  for (let from = 0; from < users.length; from += USERS_PER_TRANSACTION) {
-    queued += await assembleChunk(db, users.slice(from, from + USERS_PER_TRANSACTION), date, links, timings);
-  }
+  let from = 0;
+  const lane = async () => {
+    while (from < users.length) {
+      const chunk = users.slice(from, (from += USERS_PER_TRANSACTION));
+      const n = await assembleChunk(db, chunk, date, links, timings);
+      queued += n;
+    }
+  };
+  const outcomes = await Promise.allSettled(Array.from({ length: Math.max(1, lanes) }, lane));
+  const failure = outcomes.find((o) => o.status === 'rejected');
+  if (failure) throw failure.reason;
   return queued;
 }
