@@ -1,3 +1,4 @@
+import { QueryTypes } from 'sequelize';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { CareWindow, User } from '../../server/models';
 import { createPlant, resetDatabase, roleFixture } from '../helpers/api';
@@ -28,7 +29,7 @@ describe('care windows without foreign keys', () => {
     });
     await User.destroy({ where: { id: f.people.helper.id } });
     const [row] = await CareWindow.sequelize!.query<{ done_by: string | null; assigned_to: string | null; assigned_by: string | null }>(
-      'SELECT done_by, assigned_to, assigned_by FROM care_windows WHERE id = $1', { bind: [window.id], type: 'SELECT' },
+      'SELECT done_by, assigned_to, assigned_by FROM care_windows WHERE id = $1', { bind: [window.id], type: QueryTypes.SELECT },
     );
     expect(row).toEqual({ done_by: null, assigned_to: null, assigned_by: f.people.owner.id });
   });
