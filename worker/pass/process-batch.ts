@@ -128,7 +128,9 @@ export async function processBatch(db: Sequelize, siteIds: string[], date: IsoDa
     const climates = await timed(timings, 'read readings', () => climatesFor(sites, date));
     const previous = await timed(timings, 'claim', () => previousFingerprints(db, t, claimed, date));
     const { changed, changedSeasons, outcomes } = await timed(timings, 'work out windows', () => workOutWindows(sites, bySite, climates, previous, date));
-    for (const [siteId, written] of await timed(timings, 'write windows', () => upsertWindows(db, t, changed))) outcomes.get(siteId)!.windowsWritten = written;
+    // A batch whose changed sites all lack a fingerprint is their first pass: nothing to update.
+    const fresh = changedSeasons.length === 0;
+    for (const [siteId, written] of await timed(timings, 'write windows', () => upsertWindows(db, t, changed, fresh))) outcomes.get(siteId)!.windowsWritten = written;
     await timed(timings, 'delete stale', () => deleteStaleWindows(db, t, changed, changedSeasons));
     const done = sites.filter((s) => outcomes.get(s.id)!.status === 'done');
     for (const [siteId, count] of await timed(timings, 'decide reminders', () => decideReminders(db, t, done, date))) outcomes.get(siteId)!.reminders = count;
