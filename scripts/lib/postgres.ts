@@ -67,6 +67,8 @@ export interface ClusterOptions {
   password?: string;
   /** Off only for throw-away test clusters. */
   durable: boolean;
+  /** PostgreSQL's own cache, e.g. '1GB'; its default (128 MB) suits the demo and the tests. */
+  sharedBuffers?: string;
 }
 
 export interface Cluster {
@@ -101,6 +103,7 @@ export function initCluster(bin: string, options: ClusterOptions): void {
 export function startCluster(bin: string, options: ClusterOptions): Cluster {
   const settings = [`-h 127.0.0.1`, `-p ${options.port}`, `-k ${options.dataDir}`, '-c max_connections=200'];
   if (!options.durable) settings.push('-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off');
+  if (options.sharedBuffers) settings.push(`-c shared_buffers=${options.sharedBuffers}`);
   asServerUser(bin, 'pg_ctl', ['-D', options.dataDir, '-l', path.join(options.dataDir, 'server.log'), '-w', '-t', '60', '-o', settings.join(' '), 'start']);
   const credentials = options.password ? `${options.user}:${encodeURIComponent(options.password)}` : options.user;
   return {

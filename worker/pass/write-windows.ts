@@ -145,12 +145,13 @@ export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColu
 /**
  * The first pass over many sites fills care_windows from nothing, and PostgreSQL would go on
  * planning for an empty table (reading all of it for every batch) until autovacuum caught up:
- * once a pass has written more rows than the table's statistics know of, they are refreshed.
+ * once a pass has written eight times the rows the table's statistics know of, they are refreshed
+ * (between refreshes the planner scales the row count with the table's size by itself).
  */
 export async function refreshStatisticsIfStale(db: Sequelize, writtenThisPass: number): Promise<boolean> {
   if (writtenThisPass < 10_000) return false;
   const [row] = await db.query<{ tuples: number }>(`SELECT reltuples AS tuples FROM pg_class WHERE oid = 'care_windows'::regclass`, { type: QueryTypes.SELECT });
-  if (row && row.tuples * 2 > writtenThisPass) return false;
+  if (row && row.tuples * 8 > writtenThisPass) return false;
   await db.query('ANALYZE care_windows');
   return true;
 }
