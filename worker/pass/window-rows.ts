@@ -10,11 +10,13 @@ export interface PassSite { id: string; groupId: string; latitude: number; longi
 export interface PassPlant { id: string; groupId: string; siteId: string; typeCode: PlantTypeCode; form: PlantForm; plantedYear: number | null; healthFlags: HealthFlag[] }
 export interface Climate { readings: DailyTemperature[]; normals: MonthlyNormal[] }
 
+export interface Place { siteId: string; groupId: string; season: number }
+
 export class WindowColumns {
+  /** Each site and season the rows are for; a row names its place by number (from 1), which costs less to send than three values. */
+  readonly places: Place[] = [];
   readonly plantId: string[] = [];
-  readonly groupId: string[] = [];
-  readonly siteId: string[] = [];
-  readonly season: number[] = [];
+  readonly place: number[] = [];
   readonly task: string[] = [];
   readonly ruleKey: string[] = [];
   readonly opens: string[] = [];
@@ -32,9 +34,14 @@ export class WindowColumns {
     return this.plantId.length;
   }
 
-  /** Drops every row from `length` on (a site whose windows turned out unchanged). */
+  /** Drops every row from `length` on (a site whose windows turned out unchanged); its places stay, unused. */
   truncate(length: number): void {
-    for (const column of Object.values(this) as unknown[][]) column.length = length;
+    for (const [name, column] of Object.entries(this) as [string, unknown[]][]) if (name !== 'places') column.length = length;
+  }
+
+  /** Each row's season, for the few sites whose stale windows are looked for. */
+  seasons(): number[] {
+    return this.place.map((n) => this.places[n - 1]!.season);
   }
 }
 
@@ -52,11 +59,15 @@ function textHash(text: string | null): string {
   return hash;
 }
 
-/** A fingerprint of rows from `first` on: every column that is written, a column at a time. */
-function fingerprintRows(columns: WindowColumns, first: number): string {
-  const hash = createHash('sha1');
-  const { plantId, groupId, season, ruleKey, task, opens, closes, basis, triggerDegreeDays, triggerReachedOn, source, reason, detail } = columns;
-  for (const column of [plantId, groupId, season, ruleKey, task, opens, closes, basis, triggerDegreeDays, triggerReachedOn] as unknown[][]) {
+/**
+ * A fingerprint of the site's rows from `first` on: every column that is written, a column at a
+ * time. `runs` says which site, group and season each run of rows is for (place numbers differ from
+ * batch to batch, so they are left out).
+ */
+function fingerprintRows(columns: WindowColumns, first: number, runs: string): string {
+  const hash = createHash('sha1').update(runs);
+  const { plantId, ruleKey, task, opens, closes, basis, triggerDegreeDays, triggerReachedOn, source, reason, detail } = columns;
+  for (const column of [plantId, ruleKey, task, opens, closes, basis, triggerDegreeDays, triggerReachedOn] as unknown[][]) {
     hash.update(column.slice(first).join('\n'));
   }
   for (const column of [source, reason, detail]) hash.update(column.slice(first).map(textHash).join('\n'));
@@ -72,18 +83,19 @@ export interface SiteWindows { seasons: number[]; rows: number; fingerprint: str
 export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<number, Climate>, date: IsoDate, columns: WindowColumns): SiteWindows {
   const first = columns.length;
   const seasons = seasonsToRefresh(date, site.latitude);
+  const runs: string[] = [];
   for (const season of seasons) {
     const climate = climates.get(season) ?? { readings: [], normals: [] };
     const known = climate.readings.length && (climate.readings.at(-1) as DailyTemperature).date > date ? climate.readings.filter((r) => r.date <= date) : climate.readings;
     const ss = siteSeason(site, season, known, climate.normals);
+    const place = columns.places.push({ siteId: site.id, groupId: site.groupId, season });
+    const before = columns.length;
     for (const plant of plants) {
       const input: PlantInput = { typeCode: plant.typeCode, form: plant.form, plantedYear: plant.plantedYear, healthFlags: plant.healthFlags };
       for (const w of windowsForPlant(input, ss, date)) {
         const t = w.triggeredBy;
         columns.plantId.push(plant.id);
-        columns.groupId.push(plant.groupId);
-        columns.siteId.push(site.id);
-        columns.season.push(season);
+        columns.place.push(place);
         columns.task.push(w.task);
         columns.ruleKey.push(w.key);
         columns.opens.push(w.opens);
@@ -98,7 +110,8 @@ export function siteWindows(site: PassSite, plants: PassPlant[], climates: Map<n
         columns.triggerReachedOn.push(t?.reachedOn ?? null);
       }
     }
+    runs.push(`${site.id}/${site.groupId}/${season}/${columns.length - before}`);
   }
   const rows = columns.length - first;
-  return { seasons, rows, fingerprint: `${seasons.join(',')}:${rows}:${fingerprintRows(columns, first)}` };
+  return { seasons, rows, fingerprint: `${seasons.join(',')}:${rows}:${fingerprintRows(columns, first, runs.join(','))}` };
 }

@@ -86,14 +86,16 @@ function writeChunk(db: Sequelize, t: Transaction, bind: unknown[], upsert: bool
     `WITH wordings AS (
        SELECT n, care_window_wording_id(source, reason, detail) AS id
        FROM unnest($14::text[], $15::text[], $16::text[]) WITH ORDINALITY AS t(source, reason, detail, n)),
+     places AS (SELECT * FROM unnest($2::uuid[], $3::uuid[], $4::int[]) WITH ORDINALITY AS p(site_id, group_id, season, n)),
      written AS (
        INSERT INTO care_windows (plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, wording_id,
          trigger_degree_days, trigger_base_c, trigger_since, trigger_reached_on, computed_at)
-       SELECT w.plant_id, w.group_id, w.site_id, w.season, w.task, w.rule_key, w.opens, w.closes, w.basis, wd.id,
+       SELECT w.plant_id, pl.group_id, pl.site_id, pl.season, w.task, w.rule_key, w.opens, w.closes, w.basis, wd.id,
          w.dd, w.base, w.since, w.reached, now()
-       FROM unnest($1::uuid[], $2::uuid[], $3::uuid[], $4::int[], $5::text[], $6::text[], $7::date[], $8::date[],
+       FROM unnest($1::uuid[], $18::int[], $5::text[], $6::text[], $7::date[], $8::date[],
          $9::text[], $10::int[], $11::real[], $12::real[], $13::date[], $17::date[])
-         AS w(plant_id, group_id, site_id, season, task, rule_key, opens, closes, basis, wording_n, dd, base, since, reached)
+         AS w(plant_id, place, task, rule_key, opens, closes, basis, wording_n, dd, base, since, reached)
+       JOIN places pl ON pl.n = w.place
        JOIN wordings wd ON wd.n = w.wording_n
        ${upsert ? UPSERT : ''}
        RETURNING site_id)
@@ -119,9 +121,10 @@ export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColu
     const w = wordings(c, from, Math.min(from + CHUNK, c.length));
     await saveWordings(db, w);
     const bind = [
-      literal(c.plantId, from), literal(c.groupId, from), literal(c.siteId, from), literal(c.season, from), literal(c.task, from, true), literal(c.ruleKey, from, true),
-      literal(c.opens, from), literal(c.closes, from), literal(c.basis, from, true), literal(w.rowWording, 0),
+      literal(c.plantId, from), literal(c.places.map((p) => p.siteId), 0), literal(c.places.map((p) => p.groupId), 0), literal(c.places.map((p) => p.season), 0),
+      literal(c.task, from, true), literal(c.ruleKey, from, true), literal(c.opens, from), literal(c.closes, from), literal(c.basis, from, true), literal(w.rowWording, 0),
       literal(c.triggerDegreeDays, from), literal(c.triggerBase, from), literal(c.triggerSince, from), w.source, w.reason, w.detail, literal(c.triggerReachedOn, from),
+      literal(c.place, from),
     ];
     let rows: { site_id: string; n: string }[];
     if (fresh) {
@@ -172,7 +175,7 @@ export async function deleteStaleWindows(db: Sequelize, t: Transaction, c: Windo
        AND NOT EXISTS (SELECT 1 FROM unnest($3::uuid[], $4::int[], $5::text[]) AS k(plant_id, season, rule_key)
                        WHERE k.plant_id = cw.plant_id AND k.season = cw.season AND k.rule_key = cw.rule_key)`,
     {
-      bind: [refreshed.map((r) => r.siteId), refreshed.map((r) => r.season), c.plantId, c.season, c.ruleKey, [...new Set(refreshed.map((r) => r.groupId))]],
+      bind: [refreshed.map((r) => r.siteId), refreshed.map((r) => r.season), c.plantId, c.seasons(), c.ruleKey, [...new Set(refreshed.map((r) => r.groupId))]],
       transaction: t,
     },
   );
