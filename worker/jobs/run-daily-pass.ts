@@ -3,6 +3,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import type { IsoDate } from '../../server/care';
 import { assembleDigests, type DigestLinks } from '../pass/assemble-digests';
 import { localClock } from '../pass/calendar';
+import { inLanes } from '../pass/lanes';
 import { processBatch } from '../pass/process-batch';
 import { refreshStatisticsIfStale } from '../pass/write-windows';
 import type { Timings } from '../pass/timings';
@@ -86,10 +87,7 @@ export async function run({ db, links, now = () => new Date(), date, batchSize =
         await hook;
       }
     };
-    // Every lane finishes (or fails) before the pass goes on, so nothing is left writing behind it.
-    const outcomes = await Promise.allSettled(Array.from({ length: Math.max(1, lanes) }, lane));
-    const failure = outcomes.find((o) => o.status === 'rejected');
-    if (failure) throw failure.reason;
+    await inLanes(lanes, lane);
     // Digests go out even when another worker did the sites: whoever gets here first queues them.
     if (!signal?.aborted) result.digests += await assembleDigests(db, day, links, timings, lanes);
   }

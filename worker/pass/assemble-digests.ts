@@ -3,6 +3,7 @@ import type { IsoDate } from '../../server/care';
 import { unsubscribeToken } from '../../server/lib/signed-tokens';
 import type { MailPayload } from '../../server/schemas/mail';
 import { enqueueMails } from '../../server/services/outbox.service';
+import { inLanes } from './lanes';
 import { timed, type Timings } from './timings';
 import { plantsAndSites, waitingItems, waitingUsers, weekJobs, type WaitingItem, type WeekJob } from './digest-items';
 
@@ -124,8 +125,6 @@ export async function assembleDigests(db: Sequelize, date: IsoDate, links: Diges
       queued += n;
     }
   };
-  const outcomes = await Promise.allSettled(Array.from({ length: Math.max(1, lanes) }, lane));
-  const failure = outcomes.find((o) => o.status === 'rejected');
-  if (failure) throw failure.reason;
+  await inLanes(lanes, lane);
   return queued;
 }
