@@ -12,8 +12,8 @@ const CHUNK = 10_000;
 // letters, digits and hyphens).
 const SAFE_CODE = /^[A-Za-z0-9-]+$/;
 const checkedCodes = new Set<string>();
-function literal(values: readonly (string | number | null)[], from: number, codes = false): string {
-  const part = values.slice(from, from + CHUNK);
+function literal(values: readonly (string | number | null)[], from = 0, to = values.length, codes = false): string {
+  const part = values.slice(from, to);
   if (codes) {
     for (const code of part) {
       if (typeof code === 'string' && !checkedCodes.has(code)) {
@@ -118,13 +118,14 @@ const isUniqueViolation = (err: unknown) => (err as { parent?: { code?: string }
 export async function upsertWindows(db: Sequelize, t: Transaction, c: WindowColumns, fresh = false): Promise<Map<string, number>> {
   const written = new Map<string, number>();
   for (let from = 0; from < c.length; from += CHUNK) {
-    const w = wordings(c, from, Math.min(from + CHUNK, c.length));
+    const to = Math.min(from + CHUNK, c.length);
+    const w = wordings(c, from, to);
     await saveWordings(db, w);
     const bind = [
-      literal(c.plantId, from), literal(c.places.map((p) => p.siteId), 0), literal(c.places.map((p) => p.groupId), 0), literal(c.places.map((p) => p.season), 0),
-      literal(c.task, from, true), literal(c.ruleKey, from, true), literal(c.opens, from), literal(c.closes, from), literal(c.basis, from, true), literal(w.rowWording, 0),
-      literal(c.triggerDegreeDays, from), literal(c.triggerBase, from), literal(c.triggerSince, from), w.source, w.reason, w.detail, literal(c.triggerReachedOn, from),
-      literal(c.place, from),
+      literal(c.plantId, from, to), literal(c.places.map((p) => p.siteId)), literal(c.places.map((p) => p.groupId)), literal(c.places.map((p) => p.season)),
+      literal(c.task, from, to, true), literal(c.ruleKey, from, to, true), literal(c.opens, from, to), literal(c.closes, from, to), literal(c.basis, from, to, true),
+      literal(w.rowWording), literal(c.triggerDegreeDays, from, to), literal(c.triggerBase, from, to), literal(c.triggerSince, from, to),
+      w.source, w.reason, w.detail, literal(c.triggerReachedOn, from, to), literal(c.place, from, to),
     ];
     let rows: { site_id: string; n: string }[];
     if (fresh) {
